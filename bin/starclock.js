@@ -2,4 +2,4 @@
 // Thin launcher: the compiled CLI lives in dist/ (built by `npm run build`, run by `npm ci`'s prepare step).
 import { main } from '../dist/cli/main.js';
 
-process.exitCode = await main(process.argv);
+process.exitCode = await main(process.argv.slice(2));

@@ -1,0 +1,116 @@
+import { Command } from 'commander';
+import { mkdir, readFile, stat } from 'node:fs/promises';
+import { join, resolve } from 'node:path';
+import type { Life } from '../../lib/model/life.js';
+import type { StarState } from '../../lib/model/starState.js';
+import { STATE_KEYS } from '../../lib/model/starState.js';
+import { formatAge } from '../../lib/io/formatAge.js';
+import { formatCsv } from '../../lib/io/formatCsv.js';
+import { formatStateValue } from '../../lib/io/formatStateValue.js';
+import { formatTable } from '../../lib/io/formatTable.js';
+import type { DemoStars } from '../../lib/io/parseDemoStars.js';
+import { parseDemoStars } from '../../lib/io/parseDemoStars.js';
+import { toJson } from '../../lib/io/toJson.js';
+import { writeFileAtomic } from '../../lib/io/writeFileAtomic.js';
+import type { Io } from '../io.js';
+import { diagnostic } from '../io.js';
+import { packageInfo } from '../packageRoot.js';
+import { lifeTimeline } from './life.js';
+import { presentState } from './star.js';
+
+/** The demo scenario bundled with the package. */
+export function demoStarsPath(): string {
+  return join(packageInfo().root, 'tracks-demo', 'demo-stars.json');
+}
+
+/** File names the demo writes into its output directory. */
+export const DEMO_FILES = Object.freeze({ states: 'present-states.csv', lives: 'lives.json' });
+
+/** What the demo computed: the text for stdout and the files' contents. */
+export interface DemoResult {
+  summary: string;
+  statesCsv: string;
+  livesJson: string;
+}
+
+/**
+ * Runs the demo scenario: each named star's present state and whole life.
+ * Pure apart from the model's lazy import; writes nothing.
+ *
+ * @param scenario the validated star list
+ * @returns the summary table (one row per star: present phase, type, L, Teff,
+ *   main-sequence lifetime and fate), the present states as CSV (`name` then the
+ *   schema's keys) and the lives as JSON (`{ region, stars: [{ name, ...life }] }`)
+ */
+export async function runDemo(scenario: DemoStars): Promise<DemoResult> {
+  const states: StarState[] = [];
+  const lives: Life[] = [];
+  for (const star of scenario.stars) {
+    states.push(await presentState(star.initialMass, star.age, star.z));
+    lives.push(await lifeTimeline(star.initialMass, star.z));
+  }
+  const text = (key: keyof StarState, s: StarState): string => formatStateValue(key, s[key]).text;
+  const rows = scenario.stars.map((star, i) => {
+    const s = states[i];
+    const age = formatAge(s.age, 3);
+    const lifetime = formatAge(s.msLifetime, 3);
+    return [
+      star.name,
+      text('initialMass', s),
+      text('z', s),
+      `${age.text} ${age.unit}`,
+      s.phase,
+      text('spectralType', s),
+      text('luminosity', s),
+      text('teff', s),
+      `${lifetime.text} ${lifetime.unit}`,
+      `${s.remnant} ${text('remnantMass', s)} Msun`,
+    ];
+  });
+  const table = formatTable(
+    ['star', 'birth mass (Msun)', 'z', 'age', 'phase now', 'type', 'L (Lsun)', 'Teff (K)', 'main sequence', 'ends as'],
+    rows,
+    ['left', 'right', 'right', 'right', 'left', 'left', 'right', 'right', 'right', 'left'],
+  );
+  const header = `${scenario.region}: ${scenario.stars.length} stars today\n\n`;
+  const statesCsv = formatCsv(
+    ['name', ...STATE_KEYS],
+    scenario.stars.map((star, i) => [star.name, ...STATE_KEYS.map((key) => states[i][key])]),
+  );
+  const livesJson =
+    toJson({ region: scenario.region, stars: scenario.stars.map((star, i) => ({ name: star.name, ...lives[i] })) }, 2) + '\n';
+  return { summary: header + table, statesCsv, livesJson };
+}
+
+/** `starclock demo`: runs the bundled scenario and says what it wrote. */
+export function demoCommand(io: Io): Command {
+  return new Command('demo')
+    .description('run the bundled demo scenario (an invented region) and write its results')
+    .option('-o, --out-dir <dir>', 'directory for the output files (created if missing)', 'starclock-demo')
+    .addHelpText(
+      'after',
+      `
+Reads tracks-demo/demo-stars.json, prints a summary of each star's present state and
+fate, and writes ${DEMO_FILES.states} (present states, one row per star) and
+${DEMO_FILES.lives} (each star's whole life) into the output directory. Each file is
+written to a temporary file first and renamed, so it is whole or absent.
+`,
+    )
+    .action(async (options: { outDir: string }) => {
+      const input = demoStarsPath();
+      const scenario = parseDemoStars(await readFile(input, 'utf8'), input);
+      const result = await runDemo(scenario);
+      const dir = resolve(options.outDir);
+      const existing = await stat(dir).catch(() => undefined);
+      if (existing !== undefined && !existing.isDirectory()) {
+        throw new RangeError(`--out-dir ${options.outDir} exists and is not a directory`);
+      }
+      await mkdir(dir, { recursive: true });
+      const statesPath = join(dir, DEMO_FILES.states);
+      const livesPath = join(dir, DEMO_FILES.lives);
+      await writeFileAtomic(statesPath, result.statesCsv, [input]);
+      await writeFileAtomic(livesPath, result.livesJson, [input]);
+      io.out(result.summary);
+      diagnostic(io, `wrote ${statesPath} (${scenario.stars.length} present states) and ${livesPath} (their lives)`);
+    });
+}
