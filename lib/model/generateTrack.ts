@@ -43,13 +43,13 @@ const blueLoopDepth = knotCurve([2.5, 4, 6, 9, 12, 20, 25], [0, 0.45, 0.6, 0.6, 
  * relation of Cummings et al. 2018 (ApJ 866, 21); the first-pulse core masses themselves
  * follow detailed AGB models (≈ 0.53 Msun at 1 Msun, ≈ 0.8 at 4 Msun; from memory).
  */
-const firstPulseCoreMass = knotCurve([0.8, 1.0, 1.5, 2.0, 2.85, 3.6, 4.5, 6.0, 7.2, 8.5], [0.52, 0.55, 0.545, 0.555, 0.62, 0.79, 0.875, 0.99, 1.06, 1.15]);
+const firstPulseCoreMass = knotCurve([0.8, 1.0, 1.5, 2.0, 2.85, 3.6, 4.5, 6.0, 7.2, 8.5], [0.52, 0.545, 0.53, 0.53, 0.6, 0.78, 0.865, 0.975, 1.04, 1.12]);
 /**
  * Third-dredge-up efficiency λ (mass dredged up per mass of core growth) on the TP-AGB;
- * net core growth is (1 − λ) of the burning rate. λ ≈ 0 below ≈ 1.2 Msun, rising to ≈ 0.9
+ * net core growth is (1 − λ) of the burning rate. λ ≈ 0 at 1 Msun, rising to ≈ 0.9
  * at 5 Msun (Karakas, Lattanzio & Pols 2002, PASA 19, 515; from memory).
  */
-const dredgeUpEfficiency = knotCurve([1.2, 2.0, 3.0, 5], [0, 0.5, 0.8, 0.9]);
+const dredgeUpEfficiency = knotCurve([1.0, 1.5, 2.0, 3.0, 5], [0, 0.4, 0.6, 0.8, 0.9]);
 
 /** Lowest envelope mass, Msun, at which a giant still counts as a giant: below it the envelope is lost. */
 const ENVELOPE_FLOOR = 0.005;
@@ -105,6 +105,14 @@ export function generateTrack(initialMass: number, z: number = SOLAR_Z): Track {
   asymptoticGiantBranch(ctx);
   postAgb(ctx);
   return whiteDwarf(ctx, tMS);
+}
+
+/**
+ * Mass after losing mass at `rate` (Msun/yr) for `dt` yr, taking the rate proportional to
+ * the mass over the step (M e^(−Ṁ dt/M)): never negative however long the step.
+ */
+function afterWind(M: number, rate: number, dt: number): number {
+  return M * Math.exp((-rate * dt) / M);
 }
 
 /** Wind of the present state, Msun/yr, by the prescription of its mass class and phase. */
@@ -175,7 +183,7 @@ function mainSequence(ctx: Ctx, tZams: number, tMS: number): number {
     const age = tZams + tau * tMS;
     const logL = logLz + msLogLRise(m, tau);
     const logR = logRz + msLogRRise(m, tau);
-    if (ctx.massive && i > 0) M -= windRate(ctx, 10 ** logL, 10 ** logR, M, 0) * (age - prevAge);
+    if (ctx.massive && i > 0) M = afterWind(M, windRate(ctx, 10 ** logL, 10 ** logR, M, 0), age - prevAge);
     prevAge = age;
     b.push(age, M, 0, logL, logTeffOf(logL, logR), 'main-sequence');
     if (i === 0) b.mark('zams');
@@ -217,7 +225,7 @@ function subgiant(ctx: Ctx, tams: number, tMS: number): void {
     const logTend = ctx.massive && L1 > 10 ** 5.8 ? p.logTeff - 0.1 : hayashiLogTeff(L1, M, z);
     const ease = f * f * (3 - 2 * f);
     const logT = p.logTeff + ease * (logTend - p.logTeff);
-    M -= windRate(ctx, 10 ** logL, 10 ** logROf(logL, logT), M, mc0) * (dur / n);
+    M = afterWind(M, windRate(ctx, 10 ** logL, 10 ** logROf(logL, logT), M, mc0), dur / n);
     b.push(tams + f * dur, M, mc0 + f * (mc1 - mc0), logL, logT, 'subgiant');
   }
   b.mark('rgb-base');
@@ -281,7 +289,7 @@ function redGiantBranch(ctx: Ctx, tMS: number, lowMass: boolean): boolean {
     const L = L0 * (L1 / L0) ** f;
     const dt = dur / n;
     const logT = hayashiLogTeff(L, M, z);
-    M -= windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc) * dt;
+    M = afterWind(M, windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc), dt);
     mc += (HYDROGEN_BURN_RATE * L * dt) / x;
     age += dt;
     b.push(age, M, mc, Math.log10(L), logT, 'red-giant-branch');
@@ -338,7 +346,7 @@ function coreHeliumBurning(ctx: Ctx, tMS: number, lowMass: boolean): void {
     const L = L0 * (L1 / L0) ** f;
     const dt = i === 0 ? 0 : dur / n;
     const logT0 = heliumBurningLogTeff(ctx, L, M, mc, f, lowMass);
-    M -= windRate(ctx, L, 10 ** logROf(Math.log10(L), logT0), M, mc) * dt;
+    M = afterWind(M, windRate(ctx, L, 10 ** logROf(Math.log10(L), logT0), M, mc), dt);
     mc += (0.4 * HYDROGEN_BURN_RATE * L * dt) / x;
     age += dt;
     b.push(age, M, mc, Math.log10(L), heliumBurningLogTeff(ctx, L, M, mc, f, lowMass), 'core-helium-burning');
@@ -380,7 +388,7 @@ function asymptoticGiantBranch(ctx: Ctx): void {
     const L = L0 * (L1 / L0) ** ((mid - mc0) / (mc1 - mc0));
     const dt = (x * stepE) / (HYDROGEN_BURN_RATE * L);
     const logT = hayashiLogTeff(L, M, z);
-    M -= windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc) * dt;
+    M = afterWind(M, windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc), dt);
     mc += stepE;
     age += dt;
     const Lc = L0 * (L1 / L0) ** ((mc - mc0) / (mc1 - mc0));
@@ -510,15 +518,25 @@ function massiveHeliumBurning(ctx: Ctx, tMS: number): Track {
     const s = Math.min(1, envFrac / 0.1);
     return 4.9 + (logGiant - 4.9) * s;
   };
+  // A star stripped to its helium core shines as a helium star of its present mass:
+  // log L ≈ 2.3 + 2.7 log M (helium main sequence of detailed models; from memory),
+  // blended in as the envelope fraction falls below 10 %.
+  const luminosityAt = (f: number, Mv: number, mcv: number) => {
+    const Lgiant = L0 * 1.1 * (1.6 / 1.1) ** f;
+    const s = Math.min(1, Math.max(0, Mv - mcv) / Mv / 0.1);
+    const Lhe = Math.min(Lgiant, 10 ** (2.3 + 2.7 * Math.log10(Mv)));
+    return Lgiant ** s * Lhe ** (1 - s);
+  };
   for (let i = 0; i <= n; i++) {
     const f = i / n;
-    const L = L0 * 1.1 * (1.6 / 1.1) ** f;
+    const L = luminosityAt(f, M, mc);
     const dt = i === 0 ? 0 : dur / n;
     const logT = teffAt(L, M, mc, f);
-    M -= windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc) * dt;
+    M = afterWind(M, windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc), dt);
     mc = Math.min(M, mc + (0.3 * HYDROGEN_BURN_RATE * L * dt) / x);
     age += dt;
-    b.push(age, M, mc, Math.log10(L), teffAt(L, M, mc, f), 'core-helium-burning');
+    const Lnow = luminosityAt(f, M, mc);
+    b.push(age, M, mc, Math.log10(Lnow), teffAt(Lnow, M, mc, f), 'core-helium-burning');
     if (i === 0) {
       b.mark('he-ignition');
       b.event('helium-ignition', age);

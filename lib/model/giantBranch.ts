@@ -27,19 +27,23 @@ export function agbLuminosity(coreMass: number): number {
 
 /**
  * Effective temperature of the Hayashi line, the locus of fully convective envelopes that
- * red giants and supergiants climb (Hayashi 1961, PASJ 13, 450). Its form, log Teff linear
- * in log L, log M and log Z, follows the homology of convective envelopes; the coefficients
- * are this model's calibration to the 1 Msun red-giant tip (≈ 2800 Lsun, ≈ 180 Rsun, Pols et
- * al. 1998, MNRAS 298, 525), red supergiants near 3600 K, and metal-poor giant branches about
- * 0.1 dex hotter at [Fe/H] = −2 (from memory).
+ * red giants and supergiants climb (Hayashi 1961, PASJ 13, 450). Its form — log Teff
+ * quadratic in log L (the giant branch bends to the red as it climbs), linear in log M and
+ * log Z — follows the homology of convective envelopes; the coefficients are this model's
+ * calibration: a 1 Msun giant branch from ≈ 4850 K at its base to the red-giant tip at
+ * ≈ 2800 Lsun and ≈ 160 Rsun (Pols et al. 1998, MNRAS 298, 525: ≈ 180 Rsun, ±30 %), red
+ * supergiants near 3600–3900 K, and metal-poor giant branches ≈ 0.1 dex hotter at
+ * [Fe/H] = −2 (from memory).
  *
  * @param luminosity Lsun
  * @param mass present mass, Msun
  * @param z metal fraction
  * @returns log10 Teff/K
+ * @example 10 ** hayashiLogTeff(1e5, 15, 0.014) // ≈ 3850
  */
 export function hayashiLogTeff(luminosity: number, mass: number, z: number): number {
-  return 3.752 - 0.07 * Math.log10(luminosity) + 0.15 * Math.log10(mass) - 0.045 * Math.log10(z / SOLAR_Z);
+  const x = Math.log10(luminosity);
+  return 3.6975 - 0.01524 * x - 0.008494 * x * x + 0.15 * Math.log10(mass) - 0.045 * Math.log10(z / SOLAR_Z);
 }
 
 /**

@@ -26,7 +26,7 @@ export class TrackBuilder {
   push(age: number, mass: number, coreMass: number, logL: number, logTeff: number, phase: Phase): void {
     const n = this.age.length;
     if (!Number.isFinite(age) || !Number.isFinite(mass) || !Number.isFinite(coreMass) || !Number.isFinite(logL) || !Number.isFinite(logTeff)) {
-      throw new RangeError(`track of ${this.initialMass} Msun, z ${this.z}: non-finite point at age ${age} in ${phase}`);
+      throw new RangeError(`track of ${this.initialMass} Msun, z ${this.z}: non-finite point at age ${age} in ${phase} (M ${mass}, Mc ${coreMass}, logL ${logL}, logTeff ${logTeff})`);
     }
     if (n > 0) {
       if (age < this.age[n - 1]) throw new RangeError(`track of ${this.initialMass} Msun: age decreases at ${age} yr in ${phase}`);
