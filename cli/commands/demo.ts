@@ -63,7 +63,7 @@ export async function runDemo(scenario: DemoStars): Promise<DemoResult> {
       text('spectralType', s),
       text('luminosity', s),
       text('teff', s),
-      `${lifetime.text} ${lifetime.unit}`,
+      s.msLifetime > 0 ? `${lifetime.text} ${lifetime.unit}` : '—',
       `${s.remnant} ${text('remnantMass', s)} Msun`,
     ];
   });

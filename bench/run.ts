@@ -1,0 +1,186 @@
+// Benchmarks: `npm run bench` (builds, then runs dist/bench/run.js); `-- --json` for one JSON object.
+// Every figure is compared, in the same run, against a simple baseline, and the ratio is printed.
+import { spawnSync } from 'node:child_process';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { generateTrack } from '../lib/model/generateTrack.js';
+import { starAt } from '../lib/model/starAt.js';
+import type { Track } from '../lib/tracks/track.js';
+
+const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+const BIN = join(ROOT, 'bin', 'starclock.js');
+
+interface Figure {
+  value: number;
+  unit: string;
+  baseline: number;
+  ratio: number;
+}
+
+function median(xs: number[]): number {
+  const sorted = [...xs].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 === 1 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+const now = (): number => Number(process.hrtime.bigint()) / 1e3; // µs
+
+/**
+ * Masses spread evenly in log from 0.1 to 100 Msun. A mass the model cannot build is left out and
+ * reported on stderr, so a model failure shows instead of crashing or silently shrinking the figure.
+ */
+function masses(count: number): Float64Array {
+  const out: number[] = [];
+  const failed: string[] = [];
+  for (let i = 0; i < count; i++) {
+    const m = 0.1 * 1000 ** (i / (count - 1));
+    try {
+      generateTrack(m);
+      out.push(m);
+    } catch (error) {
+      failed.push(`${m.toPrecision(4)} Msun (${(error as Error).message})`);
+    }
+  }
+  if (failed.length > 0) {
+    process.stderr.write(`bench: generateTrack failed for ${failed.length} of ${count} masses, left out:\n  ${failed.join('\n  ')}\n`);
+  }
+  return Float64Array.from(out);
+}
+
+// Baseline for track generation: allocate the same columns for the same number of points and fill
+// them with closed-form textbook relations (t_MS = 10 Gyr M^-2.5, L = M^3.5, R = M^0.8) — the cost of
+// a track with no physics in it.
+function baselineTrack(initialMass: number, n: number): Float64Array[] {
+  const age = new Float64Array(n);
+  const mass = new Float64Array(n);
+  const coreMass = new Float64Array(n);
+  const logL = new Float64Array(n);
+  const logTeff = new Float64Array(n);
+  const tms = 1e10 * initialMass ** -2.5;
+  const l0 = 3.5 * Math.log10(initialMass);
+  const r0 = 0.8 * Math.log10(initialMass);
+  for (let i = 0; i < n; i++) {
+    const f = i / (n - 1);
+    age[i] = tms * f;
+    mass[i] = initialMass;
+    coreMass[i] = 0.1 * initialMass * f;
+    logL[i] = l0 + 0.3 * f;
+    logTeff[i] = 3.7617 + 0.25 * (logL[i] - 2 * (r0 + 0.1 * f));
+  }
+  return [age, mass, coreMass, logL, logTeff];
+}
+
+// Baseline for a state query: bisect the track's ages and blend log L linearly — the least a query can do.
+function baselineQuery(track: Track, age: number): number {
+  const ages = track.age;
+  let lo = 0;
+  let hi = track.n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (ages[mid] <= age) lo = mid;
+    else hi = mid;
+  }
+  const span = ages[hi] - ages[lo];
+  const f = span > 0 ? (age - ages[lo]) / span : 0;
+  return track.logL[lo] + f * (track.logL[hi] - track.logL[lo]);
+}
+
+let sink = 0;
+
+function benchTracks(rounds: number, grid: Float64Array): Figure {
+  const real: number[] = [];
+  const base: number[] = [];
+  for (let r = 0; r < rounds; r++) {
+    for (let i = 0; i < grid.length; i++) {
+      let t = now();
+      const track = generateTrack(grid[i]);
+      real.push(now() - t);
+      t = now();
+      const columns = baselineTrack(grid[i], track.n);
+      base.push(now() - t);
+      sink += track.n + columns[3][columns[3].length - 1];
+    }
+  }
+  const value = median(real);
+  const baseline = median(base);
+  return { value, unit: 'µs per track', baseline, ratio: value / baseline };
+}
+
+function benchQueries(grid: Float64Array, perTrack: number): Figure {
+  const tracks = Array.from(grid, (m) => generateTrack(m));
+  const real: number[] = [];
+  const base: number[] = [];
+  for (const track of tracks) {
+    const end = track.age[track.n - 1];
+    const ages = new Float64Array(perTrack);
+    for (let j = 0; j < perTrack; j++) ages[j] = Math.max(1, end * ((j + 0.5) / perTrack));
+    let t = now();
+    for (let j = 0; j < perTrack; j++) sink += starAt(track, Math.min(ages[j], 1e11)).luminosity;
+    real.push((now() - t) / perTrack);
+    t = now();
+    for (let j = 0; j < perTrack; j++) sink += baselineQuery(track, ages[j]);
+    base.push((now() - t) / perTrack);
+  }
+  const value = median(real);
+  const baseline = median(base);
+  return { value, unit: 'µs per query', baseline, ratio: value / baseline };
+}
+
+function wallMs(args: string[]): number {
+  const t = now();
+  const result = spawnSync(process.execPath, args, { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'] });
+  const elapsed = (now() - t) / 1e3;
+  if (result.status !== 0) throw new Error(`node ${args.join(' ')} failed: ${result.stderr}`);
+  return elapsed;
+}
+
+function benchStartup(runs: number): Figure {
+  const real: number[] = [];
+  const base: number[] = [];
+  wallMs(['-e', '0']);
+  wallMs([BIN, 'star', '--mass', '1', '--age', '4.6Gyr']);
+  // Interleaved, so both see the same machine load.
+  for (let i = 0; i < runs; i++) {
+    base.push(wallMs(['-e', '0']));
+    real.push(wallMs([BIN, 'star', '--mass', '1', '--age', '4.6Gyr']));
+  }
+  const value = median(real);
+  const baseline = median(base);
+  return { value, unit: 'ms per process', baseline, ratio: value / baseline };
+}
+
+function run(json: boolean): void {
+  const grid = masses(60);
+  // Warm up the JIT before measuring.
+  benchTracks(3, grid);
+  const figures: Record<string, Figure> = {
+    trackGeneration: benchTracks(15, grid),
+    stateQuery: benchQueries(grid, 2000),
+    cliStarProcess: benchStartup(15),
+  };
+  if (json) {
+    process.stdout.write(JSON.stringify(figures, null, 2) + '\n');
+    return;
+  }
+  const what: Record<string, [string, string]> = {
+    trackGeneration: [`generateTrack, ${grid.length} masses 0.1–100 Msun (median)`, 'same columns filled by textbook power laws'],
+    stateQuery: ['starAt on a built track (median)', 'bisect + linear blend of log L'],
+    cliStarProcess: ['`starclock star --mass 1 --age 4.6Gyr` (median of 15)', '`node -e 0` (median of 15)'],
+  };
+  const rows = Object.entries(figures).map(([name, f]) => [
+    name,
+    what[name][0],
+    `${f.value.toPrecision(3)} ${f.unit}`,
+    what[name][1],
+    `${f.baseline.toPrecision(3)} ${f.unit}`,
+    `${f.ratio.toFixed(2)}×`,
+  ]);
+  const header = ['figure', 'measures', 'value', 'baseline', 'baseline value', 'ratio'];
+  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => r[c].length)));
+  const line = (cells: string[]): string => cells.map((cell, c) => cell.padEnd(widths[c])).join('  ').trimEnd();
+  process.stdout.write([line(header), line(widths.map((w) => '-'.repeat(w))), ...rows.map(line)].join('\n') + '\n');
+  process.stdout.write(`node ${process.version}, ${process.platform}/${process.arch}\n`);
+  if (sink === 42) process.stdout.write('\n'); // keeps results alive
+}
+
+run(process.argv.includes('--json'));
