@@ -2,7 +2,7 @@ import { assertInRange } from './assertInRange.js';
 import { TEFF_MAX, TEFF_MIN } from './constants.js';
 import { DWARF_TABLE } from './dwarfTable.js';
 import { logPlanckLambda } from './logPlanckLambda.js';
-import { monotoneCubic } from './monotoneCubic.js';
+import { monotoneCubic } from '../interp/monotoneCubic.js';
 import { smoothBlend } from './smoothBlend.js';
 
 /**
