@@ -54,6 +54,17 @@ const dredgeUpEfficiency = knotCurve([1.0, 1.5, 2.0, 3.0, 5], [0, 0.4, 0.6, 0.8,
 /** Lowest envelope mass, Msun, at which a giant still counts as a giant: below it the envelope is lost. */
 const ENVELOPE_FLOOR = 0.005;
 
+/** Options of {@link generateTrack}. */
+export interface GenerateTrackOptions {
+  /** Keep the life beyond 100 Gyr (default false: cut at 100 Gyr). */
+  fullLife?: boolean;
+}
+
+/** Age, yr, to which a remnant or brown dwarf born at `birth` is followed: 100 Gyr, or 1 Gyr past a later birth. */
+function remnantEndAge(birth: number): number {
+  return Math.max(MAX_AGE, birth + 1e9);
+}
+
 interface Ctx {
   b: TrackBuilder;
   m: number;
@@ -72,17 +83,19 @@ interface Ctx {
  *
  * @param initialMass Msun, 0.01–150
  * @param z metal mass fraction, 1e-4–0.03 (default 0.014)
+ * @param options `fullLife: true` keeps the whole life even beyond 100 Gyr (the grid uses
+ *   it, so that every track of a kind has the same EEPs); otherwise the track is cut at 100 Gyr.
  * @throws RangeError naming the argument, its value and the valid range
  * @example generateTrack(1).msLifetime // ≈ 9.9e9
  */
-export function generateTrack(initialMass: number, z: number = SOLAR_Z): Track {
+export function generateTrack(initialMass: number, z: number = SOLAR_Z, options: GenerateTrackOptions = {}): Track {
   if (!Number.isFinite(initialMass) || initialMass < MASS_RANGE.min || initialMass > MASS_RANGE.max) {
     throw new RangeError(`initialMass ${initialMass} outside the model's ${MASS_RANGE.min}–${MASS_RANGE.max} Msun`);
   }
   if (!Number.isFinite(z) || z < Z_RANGE.min || z > Z_RANGE.max) {
     throw new RangeError(`z ${z} outside the model's ${Z_RANGE.min}–${Z_RANGE.max}`);
   }
-  const b = new TrackBuilder(initialMass, z);
+  const b = new TrackBuilder(initialMass, z, options.fullLife === true);
   if (initialMass < HYDROGEN_BURNING_LIMIT) return brownDwarfTrack(b, initialMass, z);
 
   const ctx: Ctx = { b, m: initialMass, z, zr: z / SOLAR_Z, x: composition(z).x, massive: initialMass > whiteDwarfUpperMass(z) };
@@ -130,7 +143,7 @@ function brownDwarfTrack(b: TrackBuilder, m: number, z: number): Track {
   const zr = z / SOLAR_Z;
   const n = 60;
   for (let i = 0; i <= n; i++) {
-    const age = i === 0 ? 0 : 10 ** (6 + (5 * (i - 1)) / (n - 1));
+    const age = 10 ** (5 + (6 * i) / n);
     const { luminosity, teff } = brownDwarfCooling(age, m, zr);
     b.push(age, m, 0, Math.log10(luminosity), Math.log10(teff), 'brown-dwarf');
     if (i === 0) b.mark('pms-start');
@@ -163,7 +176,7 @@ function preMainSequence(ctx: Ctx): number {
     const w = u * u * (3 - 2 * u);
     const logT = logTh + (logTz - logTh) * w;
     const logL = 2 * logR + 4 * (logT - LOG_TEFF_SUN);
-    b.push(i === 0 ? 0 : s * tPms, m, 0, logL, logT, 'pre-main-sequence');
+    b.push(s * tPms, m, 0, logL, logT, 'pre-main-sequence');
     if (i === 0) b.mark('pms-start');
   }
   return tPms;
@@ -431,6 +444,9 @@ function asymptoticGiantBranch(ctx: Ctx): void {
     }
     const q = b.last();
     if (q.age < age) b.push(age, M, mc, Math.log10(agbLuminosity(mc)), hayashiLogTeff(agbLuminosity(mc), M, z), 'asymptotic-giant-branch');
+  } else {
+    // no pulse before the envelope was gone: the first-pulse EEP sits on the last AGB point
+    b.mark('first-thermal-pulse');
   }
   b.mark('agb-end');
   b.event('envelope-lost', b.last().age);
@@ -470,7 +486,7 @@ function whiteDwarf(ctx: Ctx, tMS: number): Track {
   const tc0 = mestelCoolingAge(10 ** p.logL, mwd);
   const birth = p.age;
   b.event('remnant-birth', birth);
-  const span = Math.max(MAX_AGE - birth, 1) + tc0;
+  const span = remnantEndAge(birth) - birth + tc0;
   const n = 60;
   for (let i = 0; i <= n; i++) {
     const tc = tc0 * (span / tc0) ** (i / n);
@@ -555,7 +571,7 @@ function massiveHeliumBurning(ctx: Ctx, tMS: number): Track {
 function compactRemnant(b: TrackBuilder, kind: RemnantKind, mass: number, birth: number): void {
   const n = 40;
   for (let i = 0; i <= n; i++) {
-    const tc = i === 0 ? 0 : 10 ** (1 + (Math.log10(Math.max(MAX_AGE - birth, 100)) - 1) * (i / n));
+    const tc = i === 0 ? 0 : 10 ** (1 + (Math.log10(remnantEndAge(birth) - birth) - 1) * (i / n));
     if (kind === 'neutron-star') {
       const logT = Math.log10(neutronStarTeff(tc));
       const logL = 2 * Math.log10(NEUTRON_STAR_RADIUS) + 4 * (logT - LOG_TEFF_SUN);

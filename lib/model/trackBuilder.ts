@@ -4,7 +4,7 @@ import type { Eep, EepName, LifeEvent, LifeEventName, Track } from '../tracks/tr
 
 /**
  * Collects track points phase by phase and finishes them into a columnar {@link Track},
- * cut at {@link MAX_AGE} (the last point is interpolated onto it).
+ * cut at {@link MAX_AGE} (the last point is interpolated onto it) unless `fullLife`.
  */
 export class TrackBuilder {
   readonly age: number[] = [];
@@ -16,7 +16,7 @@ export class TrackBuilder {
   readonly eeps: Eep[] = [];
   readonly events: LifeEvent[] = [];
 
-  constructor(readonly initialMass: number, readonly z: number) {}
+  constructor(readonly initialMass: number, readonly z: number, readonly fullLife = false) {}
 
   get length(): number {
     return this.age.length;
@@ -61,7 +61,7 @@ export class TrackBuilder {
   build(msLifetime: number, remnant: RemnantKind, remnantMass: number): Track {
     let n = this.age.length;
     const cols = [this.age, this.mass, this.coreMass, this.logL, this.logTeff];
-    if (this.age[n - 1] > MAX_AGE) {
+    if (!this.fullLife && this.age[n - 1] > MAX_AGE) {
       let k = this.age.findIndex((a) => a > MAX_AGE);
       // cut between k-1 and k; inside one phase interpolate a point at MAX_AGE
       if (k > 0 && this.phase[k - 1] === this.phase[k] && this.age[k - 1] < MAX_AGE) {
@@ -88,7 +88,7 @@ export class TrackBuilder {
       logTeff: Float64Array.from(this.logTeff),
       phase: Uint8Array.from(this.phase),
       eeps,
-      events: this.events.filter((e) => e.age <= MAX_AGE),
+      events: this.fullLife ? this.events.slice() : this.events.filter((e) => e.age <= MAX_AGE),
       msLifetime,
       remnant,
       remnantMass,
