@@ -1,7 +1,8 @@
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
-import { lines, ROOT, runBin, runMain } from './cli-run.js';
+import { BIN, lines, ROOT, runBin, runMain } from './cli-run.js';
 
 const version = (JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string }).version;
 
@@ -39,5 +40,11 @@ describe('starclock (the program)', () => {
     const b = await runMain(['star', '--mass', '1', '--age', '1', '--json']);
     expect(a.code).toBe(0);
     expect(b).toEqual(a);
+  });
+
+  test('a reader that closes the pipe early (| true) ends the run quietly with exit 0', () => {
+    const script = `"${process.execPath}" "${BIN}" life --mass 1 | true; echo "status \${PIPESTATUS[0]}" >&2`;
+    const result = spawnSync('bash', ['-c', script], { encoding: 'utf8', timeout: 60000 });
+    expect(result.stderr).toBe('status 0\n');
   });
 });
