@@ -16,7 +16,7 @@ export function reimersRate(luminosity: number, radius: number, mass: number, et
  * winds over the HR diagram: log Ṁ = −14.02 + 1.24 log L + 0.16 log M + 0.81 log R (from
  * memory), scaled with metallicity as (Z/Z☉)^0.5 for line-driven winds (Kudritzki, Pauldrach &
  * Puls 1987, A&A 173, 293; common practice).
- * @example nieuwenhuijzenDeJagerRate(1e5, 10, 20, 1) // ≈ 1.2e-7
+ * @example nieuwenhuijzenDeJagerRate(1e5, 10, 20, 1) // ≈ 1.58e-7 (example corrected from ≈ 1.2e-7 by the test)
  */
 export function nieuwenhuijzenDeJagerRate(luminosity: number, radius: number, mass: number, zRatio: number): number {
   return 10 ** (-14.02 + 1.24 * Math.log10(luminosity) + 0.16 * Math.log10(mass) + 0.81 * Math.log10(radius)) * Math.sqrt(zRatio);
