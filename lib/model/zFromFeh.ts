@@ -9,7 +9,7 @@ import { SOLAR_Z } from './limits.js';
  *
  * @param feh [Fe/H] in dex
  * @throws RangeError if feh is not finite
- * @example zFromFeh(0) // 0.014; zFromFeh(-1) // ≈ 0.00145
+ * @example zFromFeh(0) // 0.014; zFromFeh(-1) // ≈ 0.00146
  */
 export function zFromFeh(feh: number): number {
   if (!Number.isFinite(feh)) throw new RangeError(`feh ${feh} is not a finite number`);
