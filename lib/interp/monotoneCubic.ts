@@ -244,8 +244,13 @@ function endParabolaSlope(sNear: number, hNear: number, sFar: number, hFar: numb
   return sNear * (1 + w) - sFar * w;
 }
 
-/** Node slopes by Steffen 1990 (A&A 239, 443), eqs. 11 and 26–27. */
-function steffenSlopes(h: Float64Array, s: Float64Array): Float64Array {
+/**
+ * Node slopes by Steffen 1990 (A&A 239, 443), eqs. 11 and 26–27, from the interval widths
+ * `h` and secant slopes `s` (length n − 1 each); returns n slopes. Exported for the grid,
+ * which precomputes slopes across tracks once.
+ * @example steffenSlopes(Float64Array.of(1, 1), Float64Array.of(1, 0)) // [1.5, 0, 0]
+ */
+export function steffenSlopes(h: Float64Array, s: Float64Array): Float64Array {
   const k = s.length; // intervals
   const m = new Float64Array(k + 1);
   if (k === 1) {

@@ -182,7 +182,11 @@ function preMainSequence(ctx: Ctx): number {
   return tPms;
 }
 
-/** Main sequence: L and R rise from the ZAMS (mainSequence.ts); winds for massive stars. Returns the TAMS age. */
+/**
+ * Main sequence: L and R rise from the ZAMS (mainSequence.ts); winds for massive stars,
+ * which can strip a very massive star down to its hydrogen-burning core but not below it.
+ * Returns the TAMS age.
+ */
 function mainSequence(ctx: Ctx, tZams: number, tMS: number): number {
   const { b, m, z } = ctx;
   const logLz = zamsLogL(m, z);
@@ -196,7 +200,7 @@ function mainSequence(ctx: Ctx, tZams: number, tMS: number): number {
     const age = tZams + tau * tMS;
     const logL = logLz + msLogLRise(m, tau);
     const logR = logRz + msLogRRise(m, tau);
-    if (ctx.massive && i > 0) M = afterWind(M, windRate(ctx, 10 ** logL, 10 ** logR, M, 0), age - prevAge);
+    if (ctx.massive && i > 0) M = Math.max(afterWind(M, windRate(ctx, 10 ** logL, 10 ** logR, M, 0), age - prevAge), tamsCoreMass(m));
     prevAge = age;
     b.push(age, M, 0, logL, logTeffOf(logL, logR), 'main-sequence');
     if (i === 0) b.mark('zams');
@@ -238,7 +242,7 @@ function subgiant(ctx: Ctx, tams: number, tMS: number): void {
     const logTend = ctx.massive && L1 > 10 ** 5.8 ? p.logTeff - 0.1 : hayashiLogTeff(L1, M, z);
     const ease = f * f * (3 - 2 * f);
     const logT = p.logTeff + ease * (logTend - p.logTeff);
-    M = afterWind(M, windRate(ctx, 10 ** logL, 10 ** logROf(logL, logT), M, mc0), dur / n);
+    M = Math.max(afterWind(M, windRate(ctx, 10 ** logL, 10 ** logROf(logL, logT), M, mc0), dur / n), mc1);
     b.push(tams + f * dur, M, mc0 + f * (mc1 - mc0), logL, logT, 'subgiant');
   }
   b.mark('rgb-base');
@@ -524,6 +528,7 @@ function massiveHeliumBurning(ctx: Ctx, tMS: number): Track {
   const n = 50;
   const depth = blueLoopDepth(m) * (1 + 0.3 * Math.max(0, -Math.log10(ctx.zr)));
   const logZams = logTeffOf(zamsLogL(m, z), zamsLogR(m, z));
+  const coFloor = 0.65 * mc;
   const teffAt = (L: number, Mv: number, mcv: number, f: number) => {
     const envFrac = Math.max(0, Mv - mcv) / Mv;
     let logGiant = L > 10 ** 5.8 ? logTblue : hayashiLogTeff(L, Mv, z);
@@ -549,6 +554,8 @@ function massiveHeliumBurning(ctx: Ctx, tMS: number): Track {
     const dt = i === 0 ? 0 : dur / n;
     const logT = teffAt(L, M, mc, f);
     M = afterWind(M, windRate(ctx, L, 10 ** logROf(Math.log10(L), logT), M, mc), dt);
+    // winds may strip the star down to its carbon–oxygen core, never below it
+    M = Math.max(M, coFloor);
     mc = Math.min(M, mc + (0.3 * HYDROGEN_BURN_RATE * L * dt) / x);
     age += dt;
     const Lnow = luminosityAt(f, M, mc);

@@ -2,7 +2,7 @@ import { MAX_AGE } from './limits.js';
 import type { StarState } from './starState.js';
 import type { Track } from '../tracks/track.js';
 import { trackSegments, type TrackSegment } from './trackSegments.js';
-import { stateFromColumns } from './stateFromColumns.js';
+import { observeState } from './observeState.js';
 
 /**
  * The state of a track's star at `age`, by Steffen monotone cubic interpolation in age
@@ -40,5 +40,8 @@ export function segmentAt(segs: TrackSegment[], age: number): TrackSegment {
 /** Full state from one phase run at `age` (clamped to the run). */
 export function evaluateSegment(track: Track, seg: TrackSegment, age: number): StarState {
   const a = Math.min(Math.max(age, seg.startAge), seg.endAge);
-  return stateFromColumns(track, age, seg.phase, seg.mass(a), seg.coreMass(a), seg.logL(a), seg.logTeff(a));
+  return observeState(
+    track.initialMass, track.z, age, seg.phase, seg.mass(a), seg.coreMass(a), seg.logL(a), seg.logTeff(a),
+    track.msLifetime, track.remnant, track.remnantMass,
+  );
 }

@@ -4,24 +4,24 @@ import { C2_RADIATION, TEFF_MAX, TEFF_MIN } from './constants.js';
 import { srgbTransfer } from './srgbTransfer.js';
 import { xyzToLinearSrgb } from './xyzToLinearSrgb.js';
 
-/** Precomputed normalised XYZ of the Planckian locus on a log10 Teff grid (0.004 dex),
- * so a call costs one lookup and a linear blend instead of 471 exponentials. The linear
- * interpolation error is below 1e-6 in chromaticity (see tests). */
+/** Normalised XYZ of the Planckian locus on a log10 Teff grid (0.004 dex), so a call costs
+ * one lookup and a linear blend instead of 471 exponentials. Nodes are filled on first use
+ * (NaN marks an empty node), so loading the module costs nothing. The linear interpolation
+ * error is below 1e-6 in chromaticity (see tests). */
 const LOG_MIN = Math.log10(TEFF_MIN);
 const LOG_MAX = Math.log10(TEFF_MAX);
 const STEP = 0.004;
 const NG = Math.round((LOG_MAX - LOG_MIN) / STEP) + 1;
-const GX = new Float64Array(NG);
+const GX = new Float64Array(NG).fill(NaN);
 const GY = new Float64Array(NG);
 const GZ = new Float64Array(NG);
-{
-  const xyz = new Float64Array(3);
-  for (let i = 0; i < NG; i++) {
-    blackbodyXyz(10 ** (LOG_MIN + i * STEP), C2_RADIATION, xyz);
-    GX[i] = xyz[0];
-    GY[i] = xyz[1];
-    GZ[i] = xyz[2];
-  }
+const XYZ = new Float64Array(3);
+function node(i: number): void {
+  if (GX[i] === GX[i]) return;
+  blackbodyXyz(10 ** (LOG_MIN + i * STEP), C2_RADIATION, XYZ);
+  GX[i] = XYZ[0];
+  GY[i] = XYZ[1];
+  GZ[i] = XYZ[2];
 }
 const HEX: string[] = [];
 for (let i = 0; i < 256; i++) HEX.push(i.toString(16).padStart(2, '0'));
@@ -51,6 +51,8 @@ export function blackbodyColor(teff: number): string {
   if (i >= NG - 1) i = NG - 2;
   if (i < 0) i = 0;
   const u = p - i;
+  node(i);
+  node(i + 1);
   const X = GX[i] + u * (GX[i + 1] - GX[i]);
   const Y = GY[i] + u * (GY[i + 1] - GY[i]);
   const Z = GZ[i] + u * (GZ[i + 1] - GZ[i]);

@@ -1,0 +1,278 @@
+import type { Grid, GridRun, GridSlab } from '../tracks/grid.js';
+import { REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+import { findInterval } from './bisect.js';
+import { MAX_AGE } from '../model/limits.js';
+import { PHASE_INDEX } from '../model/phases.js';
+import type { StarState } from '../model/starState.js';
+import { observeState } from '../model/observeState.js';
+
+/** Numeric state columns of many stars (one entry per star); `status` 0 = computed. */
+export interface StateColumns {
+  phase: Uint8Array;
+  mass: Float64Array;
+  coreMass: Float64Array;
+  luminosity: Float64Array;
+  teff: Float64Array;
+  radius: Float64Array;
+  logg: Float64Array;
+  msLifetime: Float64Array;
+  remnantMass: Float64Array;
+  /** index into REMNANT_CODES */
+  remnant: Uint8Array;
+  /** 0 computed; 1 initial mass, 2 z, 3 age outside the grid / model range (the row is zeros) */
+  status: Uint8Array;
+}
+
+/** Inputs of a columnar query: initial mass (Msun), age (yr), metal fraction (array or one value). */
+export interface QueryInput {
+  initialMass: ArrayLike<number>;
+  age: ArrayLike<number>;
+  z: ArrayLike<number> | number;
+}
+
+/** An interpolator over a grid (see {@link createGridQuery}). */
+export interface GridQuery {
+  readonly grid: Grid;
+  /** Full state of one star; throws RangeError naming the argument, value and the grid's range. */
+  star(initialMass: number, age: number, z: number): StarState;
+  /** Numeric state columns of many stars, into `out` when given (no per-star allocation). */
+  columns(input: QueryInput, out?: StateColumns): StateColumns;
+}
+
+/** Allocates output columns for `n` stars. */
+export function allocateStateColumns(n: number): StateColumns {
+  return {
+    phase: new Uint8Array(n), mass: new Float64Array(n), coreMass: new Float64Array(n), luminosity: new Float64Array(n),
+    teff: new Float64Array(n), radius: new Float64Array(n), logg: new Float64Array(n), msLifetime: new Float64Array(n),
+    remnantMass: new Float64Array(n), remnant: new Uint8Array(n), status: new Uint8Array(n),
+  };
+}
+
+// scratch result of one slab evaluation: phase, mass, coreMass, logL, logTeff, logMsLifetime, remnantMass, remnant
+const R0 = new Float64Array(8);
+const R1 = new Float64Array(8);
+const LOG_TEFF_SUN = Math.log10(5772);
+/** log10 of GM☉/R☉² in cgs (IAU 2015 nominal values): log g = this + log M − 2 log R. */
+const LOGG_SUN = Math.log10((1.3271244e20 / 6.957e8 ** 2) * 100);
+const BLACK_HOLE = PHASE_INDEX['black-hole'];
+const LN10 = Math.LN10;
+const INV_LN10 = 1 / Math.LN10;
+/** 10^x through Math.exp, several times faster than `**` in V8 (agrees to ~1e-15 relative). */
+const exp10 = (x: number) => Math.exp(x * LN10);
+/** log10 through Math.log (agrees with Math.log10 to ~1e-16 absolute). */
+const log10 = (x: number) => Math.log(x) * INV_LN10;
+
+/**
+ * Evaluates one metallicity slab at log10 mass `lm` and log10 age `la` into `r`.
+ * Mass: Hermite cubic between the two bracketing tracks with the precomputed Steffen
+ * slopes (monotone cubic over four tracks inside a run; linear when the run has two; the
+ * nearer track alone when the two bracketing tracks belong to different layouts — the grid
+ * never blends across a layout boundary). Age: the EEP index whose interpolated log age
+ * brackets `la` is found by bisection, and the state is blended linearly in log age between
+ * the two EEPs.
+ */
+function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void {
+  const logM = slab.logM;
+  let k = findInterval(logM, lm);
+  let run: GridRun;
+  let i: number;
+  let u: number;
+  let hM: number;
+  const ra = slab.runOf[k];
+  const rb = slab.runOf[k + 1];
+  if (ra === rb) {
+    run = slab.runs[ra];
+    i = slab.indexInRun[k];
+    hM = logM[k + 1] - logM[k];
+    u = (lm - logM[k]) / hM;
+    if (u < 0) u = 0;
+    else if (u > 1) u = 1;
+  } else {
+    const nearLow = lm - logM[k] < logM[k + 1] - lm;
+    if (!nearLow) k += 1;
+    run = slab.runs[slab.runOf[k]];
+    i = slab.indexInRun[k];
+    hM = 0;
+    u = 0;
+  }
+  const n = run.n;
+  const b0 = i * n;
+  const single = hM === 0;
+  const b1 = single ? b0 : b0 + n;
+  const u2 = u * u;
+  const c00 = single ? 1 : (1 + 2 * u) * (1 - u) * (1 - u);
+  const c01 = single ? 0 : u2 * (3 - 2 * u);
+  const c10 = single ? 0 : u * (1 - u) * (1 - u) * hM;
+  const c11 = single ? 0 : u2 * (u - 1) * hM;
+  const A = run.ages;
+  // last j with age(j) <= la; A holds (log age, slope) pairs
+  const a0i = 2 * b0;
+  const a1i = 2 * b1;
+  let j: number;
+  let phi: number;
+  if (!(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
+    j = 0;
+    phi = 0;
+  } else {
+    let lo = 0;
+    let hi = n - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      const x0 = a0i + 2 * mid;
+      const x1 = a1i + 2 * mid;
+      if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
+      else hi = mid - 1;
+    }
+    j = lo;
+    if (j >= n - 1) {
+      j = n - 1;
+      phi = 0;
+    } else {
+      const x0 = a0i + 2 * j;
+      const x1 = a1i + 2 * j;
+      const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
+      const ak = c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3];
+      phi = ak > aj ? (la - aj) / (ak - aj) : 0;
+      if (phi > 1) phi = 1;
+    }
+  }
+  r[0] = run.phase[j];
+  const D = run.rec;
+  const q0 = (b0 + j) * REC_STRIDE;
+  const q1 = (b1 + j) * REC_STRIDE;
+  // next EEP's records (the same ones when phi = 0, so no read past the run)
+  const step = phi > 0 ? REC_STRIDE : 0;
+  const w = 1 - phi;
+  const e0 = c00 * w, e1 = c01 * w, f0 = c10 * w, f1 = c11 * w;
+  const g0 = c00 * phi, g1 = c01 * phi, h0 = c10 * phi, h1 = c11 * phi;
+  for (let c = 0; c < REC_STRIDE; c += 2) {
+    const x0 = q0 + c;
+    const x1 = q1 + c;
+    r[1 + (c >> 1)] =
+      e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
+      g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
+  }
+  const ti = single ? i : i + u;
+  const t0 = Math.floor(ti);
+  const tf = ti - t0;
+  const t1 = tf > 0 ? t0 + 1 : t0;
+  r[5] = run.logMsLifetime[t0] * (1 - tf) + run.logMsLifetime[t1] * tf;
+  r[6] = run.remnantMass[t0] * (1 - tf) + run.remnantMass[t1] * tf;
+  r[7] = run.remnant;
+  if (r[2] > r[1]) r[2] = r[1];
+}
+
+/**
+ * Evaluates the grid at (log M, log age, log Z) into R0: the two slabs bracketing log Z
+ * are blended linearly in log Z when they agree on the phase, else the nearer one answers.
+ */
+function evalGrid(grid: Grid, lm: number, la: number, lz: number): void {
+  const slabs = grid.slabs;
+  if (slabs.length === 1) {
+    evalSlab(slabs[0], lm, la, R0);
+    return;
+  }
+  const k = findInterval(grid.logZ, lz);
+  let w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
+  if (w <= 0) {
+    evalSlab(slabs[k], lm, la, R0);
+    return;
+  }
+  if (w >= 1) {
+    evalSlab(slabs[k + 1], lm, la, R0);
+    return;
+  }
+  evalSlab(slabs[k], lm, la, R0);
+  evalSlab(slabs[k + 1], lm, la, R1);
+  if (R0[0] !== R1[0] || R0[7] !== R1[7]) {
+    if (w >= 0.5) R0.set(R1);
+    return;
+  }
+  const v = 1 - w;
+  for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
+  if (R0[2] > R0[1]) R0[2] = R0[1];
+}
+
+/**
+ * Creates the interpolator of a grid: `star(initialMass, age, z)` answers one star with the
+ * full schema state; `columns(input, out)` answers many through typed arrays with no
+ * per-star allocation. Between metallicities it interpolates in log Z.
+ *
+ * @param grid from buildGrid (built-in or a user's grid file)
+ * @example createGridQuery(builtinGrid()).star(1, 4.57e9, 0.014).teff // ≈ 5770
+ */
+export function createGridQuery(grid: Grid): GridQuery {
+  const { massRange, zRange } = grid;
+  const checkStar = (m: number, age: number, z: number) => {
+    if (!Number.isFinite(m) || m < massRange.min || m > massRange.max) {
+      throw new RangeError(`initialMass ${m} outside the ${grid.source} grid's ${massRange.min}–${massRange.max} Msun`);
+    }
+    if (!Number.isFinite(z) || z < zRange.min || z > zRange.max) {
+      throw new RangeError(`z ${z} outside the ${grid.source} grid's ${zRange.min}–${zRange.max}`);
+    }
+    if (!Number.isFinite(age) || age < 0 || age > MAX_AGE) {
+      throw new RangeError(`age ${age} yr outside 0–${MAX_AGE} yr (0–100 Gyr)`);
+    }
+  };
+  return {
+    grid,
+    star(initialMass: number, age: number, z: number): StarState {
+      checkStar(initialMass, age, z);
+      evalGrid(grid, Math.log10(initialMass), Math.log10(age), Math.log10(z));
+      return observeState(
+        initialMass, z, age, R0[0], R0[1], R0[2], R0[3], R0[4],
+        R0[5] === 0 ? 0 : 10 ** R0[5], REMNANT_CODES[R0[7]], R0[6],
+      );
+    },
+    columns(input: QueryInput, out?: StateColumns): StateColumns {
+      const n = input.initialMass.length;
+      if (input.age.length !== n || (typeof input.z !== 'number' && input.z.length !== n)) {
+        throw new RangeError(`columns: initialMass, age and z must have the same length (${n}, ${input.age.length}, ${typeof input.z === 'number' ? 'scalar' : input.z.length})`);
+      }
+      const o = out ?? allocateStateColumns(n);
+      if (o.mass.length < n) throw new RangeError(`columns: output holds ${o.mass.length} stars, need ${n}`);
+      const zs = input.z;
+      const zScalar = typeof zs === 'number';
+      const lzScalar = zScalar ? Math.log10(zs) : 0;
+      const mMin = massRange.min;
+      const mMax = massRange.max;
+      const zMin = zRange.min;
+      const zMax = zRange.max;
+      for (let s = 0; s < n; s++) {
+        const m = input.initialMass[s];
+        const age = input.age[s];
+        const z = zScalar ? zs : zs[s];
+        let bad = 0;
+        if (!(m >= mMin && m <= mMax)) bad = 1;
+        else if (!(z >= zMin && z <= zMax)) bad = 2;
+        else if (!(age >= 0 && age <= MAX_AGE)) bad = 3;
+        o.status[s] = bad;
+        if (bad) {
+          o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
+          o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
+          continue;
+        }
+        evalGrid(grid, log10(m), log10(age), zScalar ? lzScalar : log10(z));
+        const ph = R0[0];
+        const mass = R0[1];
+        const logR = 0.5 * R0[3] - 2 * (R0[4] - LOG_TEFF_SUN);
+        o.phase[s] = ph;
+        o.mass[s] = mass;
+        o.coreMass[s] = R0[2];
+        o.radius[s] = exp10(logR);
+        o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
+        if (ph === BLACK_HOLE) {
+          o.luminosity[s] = 0;
+          o.teff[s] = 0;
+        } else {
+          o.luminosity[s] = exp10(R0[3]);
+          o.teff[s] = exp10(R0[4]);
+        }
+        o.msLifetime[s] = R0[5] === 0 ? 0 : exp10(R0[5]);
+        o.remnantMass[s] = R0[6];
+        o.remnant[s] = R0[7];
+      }
+      return o;
+    },
+  };
+}

@@ -1,0 +1,171 @@
+import type { RemnantKind } from '../model/phases.js';
+import type { EepTrack } from './eepTrack.js';
+import { steffenSlopes } from '../interp/monotoneCubic.js';
+
+/** Remnant kinds by code, as stored per track in a grid. */
+export const REMNANT_CODES: readonly RemnantKind[] = ['white-dwarf', 'neutron-star', 'black-hole', 'brown-dwarf'];
+
+/** Values per EEP in {@link GridRun.rec}: each column followed by its slope in log M. */
+export const REC_STRIDE = 8;
+/** Offsets inside one EEP record of {@link GridRun.rec}. */
+export const REC = { mass: 0, coreMass: 2, logL: 4, logTeff: 6 } as const;
+
+/**
+ * A run of tracks of one metallicity that share an EEP layout and are adjacent in mass:
+ * the unit the interpolator blends within. The hot loop decides the memory layout: `ages`
+ * holds (log age, its slope) pairs per EEP, track-major, for the age bisection; `rec` holds
+ * one record of REC_STRIDE numbers per EEP — mass, core mass, log L, log Teff, each followed
+ * by its Steffen slope with respect to log10 initial mass — so one blend reads two adjacent
+ * records per track instead of eight scattered columns (measured in bench/: see README).
+ */
+export interface GridRun {
+  layout: string;
+  /** EEPs per track */
+  n: number;
+  /** tracks in the run */
+  count: number;
+  /** phase code per EEP (the same for every track of the layout) */
+  phase: Uint8Array;
+  logM: Float64Array;
+  /** [(track·n + eep)·2] = log10 age/yr, [+1] = its slope */
+  ages: Float64Array;
+  /** [(track·n + eep)·REC_STRIDE + REC.x] = column x, [+1] = its slope */
+  rec: Float64Array;
+  /** per track: log10 msLifetime/yr (0 where the track has no main sequence) */
+  logMsLifetime: Float64Array;
+  remnantMass: Float64Array;
+  remnant: number;
+}
+
+/** All tracks of one metallicity, sorted by initial mass. */
+export interface GridSlab {
+  z: number;
+  logZ: number;
+  /** log10 initial mass of every track */
+  logM: Float64Array;
+  /** run index and position in the run of every track */
+  runOf: Int32Array;
+  indexInRun: Int32Array;
+  runs: GridRun[];
+}
+
+/** A track grid ready for interpolation. */
+export interface Grid {
+  slabs: GridSlab[];
+  logZ: Float64Array;
+  massRange: { min: number; max: number };
+  zRange: { min: number; max: number };
+  /** where the grid came from, for messages ("built-in", a file name) */
+  source: string;
+}
+
+/**
+ * Builds an interpolation grid from EEP tracks: groups them by metallicity, sorts each
+ * group by mass, cuts it into runs of one EEP layout, and precomputes the Steffen (1990,
+ * A&A 239, 443) slopes of every column across the masses of each run, EEP by EEP, so a
+ * query costs a bisection and Hermite blends only.
+ *
+ * @param tracks EEP tracks (resampleEeps); two tracks with the same mass and z are an error
+ * @param source a name for messages
+ * @throws RangeError for an empty list or duplicate tracks
+ */
+export function buildGrid(tracks: readonly EepTrack[], source: string): Grid {
+  if (tracks.length === 0) throw new RangeError(`grid ${source} has no tracks`);
+  const byZ = new Map<number, EepTrack[]>();
+  for (const t of tracks) {
+    const list = byZ.get(t.z) ?? [];
+    list.push(t);
+    byZ.set(t.z, list);
+  }
+  const zs = [...byZ.keys()].sort((a, b) => a - b);
+  const slabs = zs.map((z) => buildSlab(z, byZ.get(z)!, source));
+  let mmin = Infinity;
+  let mmax = -Infinity;
+  for (const s of slabs) {
+    mmin = Math.min(mmin, 10 ** s.logM[0]);
+    mmax = Math.max(mmax, 10 ** s.logM[s.logM.length - 1]);
+  }
+  return {
+    slabs,
+    logZ: Float64Array.from(slabs.map((s) => s.logZ)),
+    massRange: { min: mmin, max: mmax },
+    zRange: { min: zs[0], max: zs[zs.length - 1] },
+    source,
+  };
+}
+
+function buildSlab(z: number, list: EepTrack[], source: string): GridSlab {
+  const tracks = list.slice().sort((a, b) => a.initialMass - b.initialMass);
+  for (let i = 1; i < tracks.length; i++) {
+    if (tracks[i].initialMass === tracks[i - 1].initialMass) {
+      throw new RangeError(`grid ${source}: two tracks of ${tracks[i].initialMass} Msun at z ${z}`);
+    }
+  }
+  const runOf = new Int32Array(tracks.length);
+  const indexInRun = new Int32Array(tracks.length);
+  const runs: GridRun[] = [];
+  let start = 0;
+  for (let i = 1; i <= tracks.length; i++) {
+    if (i === tracks.length || tracks[i].layout !== tracks[start].layout) {
+      const members = tracks.slice(start, i);
+      for (let k = 0; k < members.length; k++) {
+        runOf[start + k] = runs.length;
+        indexInRun[start + k] = k;
+      }
+      runs.push(buildRun(members));
+      start = i;
+    }
+  }
+  return { z, logZ: Math.log10(z), logM: Float64Array.from(tracks.map((t) => Math.log10(t.initialMass))), runOf, indexInRun, runs };
+}
+
+function buildRun(members: EepTrack[]): GridRun {
+  const n = members[0].n;
+  const count = members.length;
+  const logM = Float64Array.from(members.map((t) => Math.log10(t.initialMass)));
+  const cols = ['logAge', 'mass', 'coreMass', 'logL', 'logTeff'] as const;
+  const ages = new Float64Array(count * n * 2);
+  const rec = new Float64Array(count * n * REC_STRIDE);
+  const value = new Float64Array(count * n);
+  const slope = new Float64Array(count * n);
+  for (const c of cols) {
+    for (let k = 0; k < count; k++) value.set(members[k][c], k * n);
+    runSlopes(logM, n, value, slope);
+    const [dst, stride, off] = c === 'logAge' ? [ages, 2, 0] : [rec, REC_STRIDE, REC[c]];
+    for (let p = 0; p < count * n; p++) {
+      dst[p * stride + off] = value[p];
+      dst[p * stride + off + 1] = slope[p];
+    }
+  }
+  return {
+    layout: members[0].layout,
+    n,
+    count,
+    phase: members[0].phase.slice(),
+    logM,
+    ages,
+    rec,
+    logMsLifetime: Float64Array.from(members.map((t) => (t.msLifetime > 0 ? Math.log10(t.msLifetime) : 0))),
+    remnantMass: Float64Array.from(members.map((t) => t.remnantMass)),
+    remnant: REMNANT_CODES.indexOf(members[0].remnant),
+  };
+}
+
+/**
+ * Steffen 1990 slopes (steffenSlopes: eqs. 11, 26–27) across the masses `logM` of one
+ * column `y` (track-major, n EEPs per track), EEP by EEP, into `d`. Two tracks: the
+ * secant; one: zero.
+ */
+export function runSlopes(logM: Float64Array, n: number, y: Float64Array, d: Float64Array): void {
+  const count = logM.length;
+  d.fill(0);
+  if (count < 2) return;
+  const h = new Float64Array(count - 1);
+  for (let k = 0; k < count - 1; k++) h[k] = logM[k + 1] - logM[k];
+  const sec = new Float64Array(count - 1);
+  for (let j = 0; j < n; j++) {
+    for (let k = 0; k < count - 1; k++) sec[k] = (y[(k + 1) * n + j] - y[k * n + j]) / h[k];
+    const m = steffenSlopes(h, sec);
+    for (let k = 0; k < count; k++) d[k * n + j] = m[k];
+  }
+}
