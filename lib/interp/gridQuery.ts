@@ -1,6 +1,7 @@
 import type { Grid, GridRun, GridSlab } from '../tracks/grid.js';
 import { REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
 import { findInterval } from './bisect.js';
+import { locateMass, type MassBlend } from './massBlend.js';
 import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
 import type { StarState } from '../model/starState.js';
@@ -64,46 +65,16 @@ const log10 = (x: number) => Math.log(x) * INV_LN10;
 
 /**
  * Evaluates one metallicity slab at log10 mass `lm` and log10 age `la` into `r`.
- * Mass: Hermite cubic between the two bracketing tracks with the precomputed Steffen
- * slopes (monotone cubic over four tracks inside a run; linear when the run has two; the
- * nearer track alone when the two bracketing tracks belong to different layouts — the grid
- * never blends across a layout boundary). Age: the EEP index whose interpolated log age
+ * Mass: see locateMass. Age: the EEP index whose interpolated log age
  * brackets `la` is found by bisection, and the state is blended linearly in log age between
  * the two EEPs.
  */
+const MB: MassBlend = { run: undefined as unknown as GridRun, b0: 0, b1: 0, i: 0, u: 0, c00: 1, c01: 0, c10: 0, c11: 0 };
+
 function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void {
-  const logM = slab.logM;
-  let k = findInterval(logM, lm);
-  let run: GridRun;
-  let i: number;
-  let u: number;
-  let hM: number;
-  const ra = slab.runOf[k];
-  const rb = slab.runOf[k + 1];
-  if (ra === rb) {
-    run = slab.runs[ra];
-    i = slab.indexInRun[k];
-    hM = logM[k + 1] - logM[k];
-    u = (lm - logM[k]) / hM;
-    if (u < 0) u = 0;
-    else if (u > 1) u = 1;
-  } else {
-    const nearLow = lm - logM[k] < logM[k + 1] - lm;
-    if (!nearLow) k += 1;
-    run = slab.runs[slab.runOf[k]];
-    i = slab.indexInRun[k];
-    hM = 0;
-    u = 0;
-  }
+  locateMass(slab, lm, MB);
+  const { run, b0, b1, c00, c01, c10, c11, i, u } = MB;
   const n = run.n;
-  const b0 = i * n;
-  const single = hM === 0;
-  const b1 = single ? b0 : b0 + n;
-  const u2 = u * u;
-  const c00 = single ? 1 : (1 + 2 * u) * (1 - u) * (1 - u);
-  const c01 = single ? 0 : u2 * (3 - 2 * u);
-  const c10 = single ? 0 : u * (1 - u) * (1 - u) * hM;
-  const c11 = single ? 0 : u2 * (u - 1) * hM;
   const A = run.ages;
   // last j with age(j) <= la; A holds (log age, slope) pairs
   const a0i = 2 * b0;
@@ -152,7 +123,7 @@ function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void
       e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
       g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
   }
-  const ti = single ? i : i + u;
+  const ti = i + u;
   const t0 = Math.floor(ti);
   const tf = ti - t0;
   const t1 = tf > 0 ? t0 + 1 : t0;

@@ -1,0 +1,96 @@
+import type { Grid, GridSlab } from '../tracks/grid.js';
+import { REC, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+import { findInterval } from './bisect.js';
+import { locateMass, type MassBlend } from './massBlend.js';
+import type { RemnantKind } from '../model/phases.js';
+
+/** A track interpolated from a grid at one initial mass and z, EEP by EEP. */
+export interface InterpolatedTrack {
+  initialMass: number;
+  z: number;
+  n: number;
+  /** yr */
+  age: Float64Array;
+  mass: Float64Array;
+  coreMass: Float64Array;
+  logL: Float64Array;
+  logTeff: Float64Array;
+  phase: Uint8Array;
+  msLifetime: number;
+  remnant: RemnantKind;
+  remnantMass: number;
+}
+
+function slabTrack(slab: GridSlab, lm: number) {
+  const mb = {} as MassBlend;
+  locateMass(slab, lm, mb);
+  const { run, b0, b1, c00, c01, c10, c11 } = mb;
+  const n = run.n;
+  const out = { n, logAge: new Float64Array(n), cols: new Float64Array(n * 4), phase: run.phase, layout: run.layout, msl: 0, rm: 0, remnant: run.remnant };
+  for (let j = 0; j < n; j++) {
+    const a0 = 2 * (b0 + j);
+    const a1 = 2 * (b1 + j);
+    out.logAge[j] = c00 * run.ages[a0] + c10 * run.ages[a0 + 1] + c01 * run.ages[a1] + c11 * run.ages[a1 + 1];
+    const q0 = (b0 + j) * REC_STRIDE;
+    const q1 = (b1 + j) * REC_STRIDE;
+    for (let c = 0; c < 4; c++) {
+      const o = 2 * c;
+      out.cols[j * 4 + c] = c00 * run.rec[q0 + o] + c10 * run.rec[q0 + o + 1] + c01 * run.rec[q1 + o] + c11 * run.rec[q1 + o + 1];
+    }
+  }
+  const t0 = mb.i;
+  const t1 = mb.u > 0 ? t0 + 1 : t0;
+  out.msl = run.logMsLifetime[t0] * (1 - mb.u) + run.logMsLifetime[t1] * mb.u;
+  out.rm = run.remnantMass[t0] * (1 - mb.u) + run.remnantMass[t1] * mb.u;
+  return out;
+}
+
+/**
+ * The EEP track of a star of initial mass `initialMass` and metal fraction `z` interpolated
+ * from a grid: at every EEP, age and state are blended across the neighbouring tracks in
+ * mass exactly as the point query does (locateMass), then linearly in log Z between the two
+ * bracketing metallicities when they share the EEP layout (else the nearer one's track).
+ *
+ * @throws RangeError when mass or z is outside the grid
+ * @example interpolatedTrack(grid, 1, 0.014).phase[0] // 0 (pre-main-sequence)
+ */
+export function interpolatedTrack(grid: Grid, initialMass: number, z: number): InterpolatedTrack {
+  if (!(initialMass >= grid.massRange.min && initialMass <= grid.massRange.max)) {
+    throw new RangeError(`initialMass ${initialMass} outside the ${grid.source} grid's ${grid.massRange.min}–${grid.massRange.max} Msun`);
+  }
+  if (!(z >= grid.zRange.min && z <= grid.zRange.max)) {
+    throw new RangeError(`z ${z} outside the ${grid.source} grid's ${grid.zRange.min}–${grid.zRange.max}`);
+  }
+  const lm = Math.log10(initialMass);
+  const lz = Math.log10(z);
+  let a = slabTrack(grid.slabs[0], lm);
+  if (grid.slabs.length > 1) {
+    const k = findInterval(grid.logZ, lz);
+    const w = Math.min(1, Math.max(0, (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k])));
+    a = slabTrack(grid.slabs[k], lm);
+    if (w > 0) {
+      const b = slabTrack(grid.slabs[k + 1], lm);
+      if (b.layout === a.layout) {
+        for (let j = 0; j < a.n; j++) a.logAge[j] = (1 - w) * a.logAge[j] + w * b.logAge[j];
+        for (let j = 0; j < a.cols.length; j++) a.cols[j] = (1 - w) * a.cols[j] + w * b.cols[j];
+        a.msl = (1 - w) * a.msl + w * b.msl;
+        a.rm = (1 - w) * a.rm + w * b.rm;
+      } else if (w >= 0.5) a = b;
+    }
+  }
+  const n = a.n;
+  const col = (c: number) => {
+    const x = new Float64Array(n);
+    for (let j = 0; j < n; j++) x[j] = a.cols[j * 4 + c];
+    return x;
+  };
+  const age = new Float64Array(n);
+  for (let j = 0; j < n; j++) age[j] = 10 ** a.logAge[j];
+  const mass = col(REC.mass / 2);
+  const coreMass = col(REC.coreMass / 2);
+  for (let j = 0; j < n; j++) if (coreMass[j] > mass[j]) coreMass[j] = mass[j];
+  return {
+    initialMass, z, n, age, mass, coreMass, logL: col(REC.logL / 2), logTeff: col(REC.logTeff / 2), phase: a.phase.slice(),
+    msLifetime: a.msl === 0 ? 0 : 10 ** a.msl, remnant: REMNANT_CODES[a.remnant], remnantMass: a.rm,
+  };
+}

@@ -1,0 +1,65 @@
+import type { GridRun, GridSlab } from '../tracks/grid.js';
+import { findInterval } from './bisect.js';
+
+/**
+ * Where a mass falls in a metallicity slab and the cubic Hermite weights that blend the two
+ * bracketing tracks there: value = c00·y₀ + c10·y₀′ + c01·y₁ + c11·y₁′, with y′ the
+ * precomputed Steffen slopes in log M (already scaled by the interval width here).
+ */
+export interface MassBlend {
+  run: GridRun;
+  /** first EEP index of the lower and upper track in the run's track-major arrays */
+  b0: number;
+  b1: number;
+  /** lower track's position in the run and the fraction toward the upper one (0 when single) */
+  i: number;
+  u: number;
+  c00: number;
+  c01: number;
+  c10: number;
+  c11: number;
+}
+
+/**
+ * Fills `out` for log10 initial mass `lm` in `slab`: the Hermite cubic between the two
+ * bracketing tracks with their Steffen slopes — the monotone cubic through the four nearest
+ * tracks of a run (linear where the run has only two) — or, when the two bracketing tracks
+ * belong to different EEP layouts (either side of the helium-flash mass, of the white-dwarf /
+ * neutron-star / black-hole boundaries…), the nearer track alone: the grid never blends
+ * tracks that do not share their EEPs. Masses outside the slab take its end track.
+ */
+export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
+  const logM = slab.logM;
+  let k = findInterval(logM, lm);
+  const ra = slab.runOf[k];
+  if (ra === slab.runOf[k + 1]) {
+    const run = slab.runs[ra];
+    const hM = logM[k + 1] - logM[k];
+    let u = (lm - logM[k]) / hM;
+    if (u < 0) u = 0;
+    else if (u > 1) u = 1;
+    const i = slab.indexInRun[k];
+    const v = 1 - u;
+    out.run = run;
+    out.i = i;
+    out.u = u;
+    out.b0 = i * run.n;
+    out.b1 = out.b0 + run.n;
+    out.c00 = (1 + 2 * u) * v * v;
+    out.c01 = u * u * (3 - 2 * u);
+    out.c10 = u * v * v * hM;
+    out.c11 = u * u * (u - 1) * hM;
+    return;
+  }
+  if (lm - logM[k] >= logM[k + 1] - lm) k += 1;
+  const run = slab.runs[slab.runOf[k]];
+  out.run = run;
+  out.i = slab.indexInRun[k];
+  out.u = 0;
+  out.b0 = out.i * run.n;
+  out.b1 = out.b0;
+  out.c00 = 1;
+  out.c01 = 0;
+  out.c10 = 0;
+  out.c11 = 0;
+}
