@@ -1,6 +1,7 @@
 import { InvalidArgumentError, Option } from 'commander';
 import { MASS_RANGE, MAX_AGE, SOLAR_Z, UNIVERSE_AGE, Z_RANGE } from '../lib/model/limits.js';
 import { fehFromZ, zFromFeh } from '../lib/model/zFromFeh.js';
+import { formatAge } from '../lib/io/formatAge.js';
 import { parseAge } from '../lib/io/parseAge.js';
 import { parseNumber } from '../lib/io/parseNumber.js';
 
@@ -71,7 +72,8 @@ export function parseAgeOption(text: string): number {
 /** Warning text for ages beyond the age of the universe, or undefined. */
 export function ageWarning(age: number): string | undefined {
   if (age <= UNIVERSE_AGE) return undefined;
-  return `warning: age ${age / 1e9} Gyr exceeds the age of the universe (${UNIVERSE_AGE / 1e9} Gyr); the model extrapolates`;
+  const shown = formatAge(age);
+  return `warning: age ${shown.text} ${shown.unit} exceeds the age of the universe (${UNIVERSE_AGE / 1e9} Gyr); the model extrapolates`;
 }
 
 export const massOption = (): Option =>
