@@ -43,6 +43,8 @@ interface Run {
   firstLine: number;
   lastLine: number;
   bad: boolean;
+  /** rows are missing or repeated, so its EEP labels cannot be judged */
+  unsure: boolean;
   lines: number[];
   age: number[];
   mass: number[];
@@ -142,10 +144,12 @@ export function gridFileRead(text: string, buildTracks: boolean): GridFileReadRe
           `the track initialMass ${im} Msun, z ${z} appears again (first on rows ${before.firstLine}–${before.lastLine}); ` +
           'each (initialMass, z) must be one run of consecutive rows');
         duplicated.add(key);
+        run.unsure = true;
       } else if (keyOk) seenKeys.set(key, run);
     }
     run.lastLine = line;
     if (!keyOk || rec.error || f.length !== GRID_FILE_COLUMNS.length) run.bad = true;
+    if (!keyOk || f.length !== GRID_FILE_COLUMNS.length) run.unsure = true;
     if (f.length !== GRID_FILE_COLUMNS.length) continue;
 
     const age = numberCell(cell('age'), line, 'age', 'yr', (x) => x >= 0, '≥ 0', problem);
@@ -157,7 +161,7 @@ export function gridFileRead(text: string, buildTracks: boolean): GridFileReadRe
     }
     const luminosity = numberCell(cell('luminosity'), line, 'luminosity', 'Lsun', (x) => x > 0, '> 0', problem);
     const teff = numberCell(cell('teff'), line, 'teff', 'K', (x) => x > 0, '> 0', problem);
-    const radius = numberCell(cell('radius'), line, 'radius', 'Rsun', (x) => x > 0, '> 0', problem);
+    let radius = numberCell(cell('radius'), line, 'radius', 'Rsun', (x) => x > 0, '> 0', problem);
     if (!Number.isNaN(luminosity) && !Number.isNaN(teff) && !Number.isNaN(radius)) {
       const t = teff / GRID_FILE_TEFF_SUN;
       const expected = Math.sqrt(luminosity) / (t * t);
@@ -166,6 +170,7 @@ export function gridFileRead(text: string, buildTracks: boolean): GridFileReadRe
         problem(line, 'radius', cell('radius')!,
           `radius ${radius} Rsun disagrees by ${(off * 100).toPrecision(3)} % with ${expected.toPrecision(6)} Rsun, the Stefan–Boltzmann radius ` +
           `of luminosity ${luminosity} Lsun and teff ${teff} K (R = √L / (Teff / 5772 K)²); at most ${GRID_FILE_RADIUS_TOLERANCE * 100} % is allowed`);
+        radius = NaN;
       }
     }
     const phaseText = (cell('phase') ?? '').trim();
@@ -176,6 +181,7 @@ export function gridFileRead(text: string, buildTracks: boolean): GridFileReadRe
     const eep = eepCell(cell('eep') ?? '', line, problem);
     const bad = [age, mass, coreMass, luminosity, teff, radius].some(Number.isNaN) || phase < 0 || eep === undefined;
     if (bad) run.bad = true;
+    if (eep === undefined) run.unsure = true; // a bad label: which EEPs the track meant is unknown
     addPoint(run, line, age, mass, coreMass, luminosity, teff, phase, eep ?? null, cell('age')!, cell('mass')!, problem);
   }
   finish();
@@ -261,7 +267,7 @@ function eepCell(
 
 function newRun(key: string, initialMass: number, z: number, initialMassText: string, line: number): Run {
   return {
-    key, initialMass, z, initialMassText, firstLine: line, lastLine: line, bad: false,
+    key, initialMass, z, initialMassText, firstLine: line, lastLine: line, bad: false, unsure: false,
     lines: [], age: [], mass: [], coreMass: [], luminosity: [], teff: [], phase: [], eep: [],
   };
 }
@@ -283,6 +289,7 @@ function addPoint(
         `the track initialMass ${run.initialMass} Msun, z ${run.z} starts again here (it began on row ${run.firstLine}); ` +
         'each (initialMass, z) must appear once');
       run.bad = true;
+      run.unsure = true;
     } else {
       if (age < pAge) {
         problem(line, 'age', ageText, `age ${age} yr is before row ${pLine}'s ${pAge} yr; ages must not decrease along a track`);
@@ -325,7 +332,7 @@ function finishRun(
   run: Run, build: boolean, problem: (row: number, column: string | null, value: string | null, message: string) => void,
 ): Track | null {
   const n = run.lines.length;
-  if (n === 0) return null;
+  if (n === 0 || run.unsure) return null;
   if (run.phase.some((p) => p < 0) || run.age.some(Number.isNaN)) return null; // EEPs cannot be judged
   const phase = Uint8Array.from(run.phase);
   const age = Float64Array.from(run.age);
