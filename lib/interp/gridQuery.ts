@@ -6,6 +6,7 @@ import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
 import type { StarState } from '../model/starState.js';
 import { observeState } from '../model/observeState.js';
+import { schwarzschildRadius } from '../model/neutronStar.js';
 
 /** Numeric state columns of many stars (one entry per star); `status` 0 = computed. */
 export interface StateColumns {
@@ -235,6 +236,7 @@ export function createGridQuery(grid: Grid): GridQuery {
         if (ph === BLACK_HOLE) {
           o.luminosity[s] = 0;
           o.teff[s] = 0;
+          o.radius[s] = schwarzschildRadius(mass);
         } else {
           o.luminosity[s] = exp10(R0[3]);
           o.teff[s] = exp10(R0[4]);

@@ -1,0 +1,173 @@
+import { beforeAll, describe, expect, test } from 'vitest';
+import fc from 'fast-check';
+import { loadBuiltinGrid } from '../lib/io/loadBuiltinGrid.js';
+import { createGridQuery, type GridQuery } from '../lib/interp/gridQuery.js';
+import { accuracySample } from '../lib/interp/accuracySample.js';
+import { monotoneCubic } from '../lib/interp/monotoneCubic.js';
+import { locateMass, type MassBlend } from '../lib/interp/massBlend.js';
+import { REC, REC_STRIDE, type Grid } from '../lib/tracks/grid.js';
+import { serializeGrid, deserializeGrid } from '../lib/tracks/gridCache.js';
+import { PHASE_INDEX } from '../lib/model/phases.js';
+
+let grid: Grid;
+let q: GridQuery;
+beforeAll(() => {
+  grid = loadBuiltinGrid();
+  q = createGridQuery(grid);
+});
+
+const solar = () => grid.slabs.find((s) => s.z === 0.014)!;
+
+describe('createGridQuery(grid).star(initialMass, age, z)', () => {
+  test('star() is exact at a grid node: a track mass at one of its EEP ages gives that EEP state', () => {
+    const slab = solar();
+    const run = slab.runs.find((r) => r.layout.includes('flash') && r.count > 4)!;
+    const k = 3;
+    const j = Math.floor(run.n / 3);
+    const m = 10 ** run.logM[k];
+    const a = 10 ** run.ages[2 * (k * run.n + j)];
+    const s = q.star(m, a, 0.014);
+    const rec = (k * run.n + j) * REC_STRIDE;
+    // tolerance 1e-9 dex: log/exp round trips of mass and age only
+    expect(Math.log10(s.luminosity)).toBeCloseTo(run.rec[rec + REC.logL], 9);
+    expect(Math.log10(s.teff)).toBeCloseTo(run.rec[rec + REC.logTeff], 9);
+    expect(s.mass).toBeCloseTo(run.rec[rec + REC.mass], 9);
+  });
+
+  test('star() blends masses with the monotone cubic through the run (Steffen 1990): equals monotoneCubic over the tracks at a fixed EEP', () => {
+    const slab = solar();
+    const run = slab.runs.reduce((a, b) => (b.count > a.count ? b : a));
+    const j = Math.floor(run.n / 2);
+    const ys = Array.from({ length: run.count }, (_, k) => run.rec[(k * run.n + j) * REC_STRIDE + REC.logL]);
+    const f = monotoneCubic(run.logM, ys);
+    const mb = {} as MassBlend;
+    for (const frac of [0.13, 0.5, 0.77]) {
+      const k = Math.floor(run.count / 2);
+      const lm = run.logM[k] + frac * (run.logM[k + 1] - run.logM[k]);
+      const firstTrack = slab.runOf.indexOf(slab.runs.indexOf(run));
+      locateMass(slab, lm, mb);
+      expect(mb.i + firstTrack).toBeGreaterThanOrEqual(0);
+      const v = mb.c00 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL] + mb.c10 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL + 1]
+        + mb.c01 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL] + mb.c11 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL + 1];
+      expect(v).toBeCloseTo(f(lm), 12);
+    }
+  });
+
+  test('star() gives the Sun at 4.57 Gyr (IAU 2015 B3 nominal: L 1 ±5 %, Teff 5772 K ±1.5 %, R 1 ±5 %)', () => {
+    const s = q.star(1, 4.57e9, 0.014);
+    expect(s.luminosity).toBeGreaterThan(0.95);
+    expect(s.luminosity).toBeLessThan(1.05);
+    expect(Math.abs(s.teff / 5772 - 1)).toBeLessThan(0.015);
+    expect(Math.abs(s.radius - 1)).toBeLessThan(0.05);
+    expect(s.phase).toBe('main-sequence');
+  });
+
+  test.each([
+    ['initialMass', () => q.star(200, 1e9, 0.014), /initialMass 200 outside/],
+    ['z', () => q.star(1, 1e9, 0.05), /z 0.05 outside/],
+    ['age', () => q.star(1, -1, 0.014), /age -1 yr outside/],
+    ['age NaN', () => q.star(1, NaN, 0.014), /age NaN/],
+  ])('star() throws RangeError naming %s and the valid range', (_, f, re) => {
+    expect(f).toThrow(RangeError);
+    expect(f).toThrow(re);
+  });
+
+  test('star() never blends across the helium-flash mass: a flash star and a quiet-ignition star either side', () => {
+    const lo = q.star(1.98, 1.5e9, 0.014);
+    const hi = q.star(2.02, 1.5e9, 0.014);
+    expect(lo.phase).toBeDefined();
+    expect(hi.phase).toBeDefined();
+    // at 1.5 Gyr both are past the main sequence; their core masses differ as the two layouts do
+    expect(Number.isFinite(lo.coreMass) && Number.isFinite(hi.coreMass)).toBe(true);
+  });
+});
+
+describe('createGridQuery(grid) — accuracy against the direct model (issue targets)', () => {
+  test('accuracySample at solar z: median |Δlog L| ≤ 0.01 and |Δlog Teff| ≤ 0.005 dex on the MS, ≤ 0.03 / 0.01 later, phases agree ≥ 99 %', () => {
+    const [ms, late] = accuracySample(q, { count: 300, seed: 99 });
+    expect(ms.medianDLogL).toBeLessThanOrEqual(0.01);
+    expect(ms.medianDLogTeff).toBeLessThanOrEqual(0.005);
+    expect(late.medianDLogL).toBeLessThanOrEqual(0.03);
+    expect(late.medianDLogTeff).toBeLessThanOrEqual(0.01);
+    expect(ms.phaseAgreement).toBeGreaterThanOrEqual(0.99);
+    expect(late.phaseAgreement).toBeGreaterThanOrEqual(0.99);
+  });
+
+  test('accuracySample between metallicity nodes (z 0.0042): main-sequence targets hold', () => {
+    const [ms, late] = accuracySample(q, { count: 200, seed: 5, z: 0.0042 });
+    expect(ms.medianDLogL).toBeLessThanOrEqual(0.01);
+    expect(ms.medianDLogTeff).toBeLessThanOrEqual(0.005);
+    expect(late.medianDLogL).toBeLessThanOrEqual(0.03);
+  });
+});
+
+describe('createGridQuery(grid).columns(input, out)', () => {
+  test('columns() equals star() star by star', () => {
+    const m = Float64Array.of(0.05, 0.3, 1, 2.5, 9, 30, 120);
+    const a = Float64Array.of(1e9, 5e9, 4.6e9, 5e8, 3e7, 6.5e6, 2e6);
+    const c = q.columns({ initialMass: m, age: a, z: 0.014 });
+    for (let i = 0; i < m.length; i++) {
+      const s = q.star(m[i], a[i], 0.014);
+      expect(c.status[i]).toBe(0);
+      expect(c.phase[i]).toBe(PHASE_INDEX[s.phase]);
+      // tolerance 1e-12 relative: the columns use exp/log in place of ** and log10
+      expect(c.luminosity[i]).toBeCloseTo(s.luminosity, 12 - Math.max(0, Math.ceil(Math.log10(s.luminosity + 1))));
+      expect(c.teff[i] / (s.teff || 1)).toBeCloseTo(s.teff === 0 ? 0 : 1, 12);
+      expect(c.radius[i] / s.radius).toBeCloseTo(1, 12);
+      expect(c.mass[i]).toBeCloseTo(s.mass, 12);
+    }
+  });
+
+  test('columns() marks rows out of range with a status code and zeros, and computes the rest', () => {
+    const c = q.columns({ initialMass: [1, 500, 1, 1], age: [1e9, 1e9, 1e9, 2e11], z: [0.014, 0.014, 0.9, 0.014] });
+    expect(Array.from(c.status)).toEqual([0, 1, 2, 3]);
+    expect(c.luminosity[0]).toBeGreaterThan(0);
+    expect(c.luminosity[1]).toBe(0);
+  });
+
+  test('columns() over random stars is finite, keeps coreMass ≤ mass and is deterministic (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.double({ min: -2, max: Math.log10(150), noNaN: true }), fc.double({ min: 0, max: 1e11, noNaN: true }), fc.double({ min: -4, max: Math.log10(0.03), noNaN: true })), { minLength: 1, maxLength: 40 }),
+        (rows) => {
+          const input = { initialMass: rows.map((r) => 10 ** r[0]), age: rows.map((r) => r[1]), z: rows.map((r) => 10 ** r[2]) };
+          const a = q.columns(input);
+          const b = q.columns(input);
+          for (let i = 0; i < rows.length; i++) {
+            if (a.status[i] !== 0) continue;
+            for (const k of ['mass', 'coreMass', 'luminosity', 'teff', 'radius', 'logg', 'msLifetime', 'remnantMass'] as const) {
+              if (!Number.isFinite(a[k][i])) return false;
+              if (a[k][i] !== b[k][i]) return false;
+            }
+            if (a.coreMass[i] > a.mass[i]) return false;
+          }
+          return true;
+        },
+      ),
+      { seed: 20261201, numRuns: 200 },
+    );
+  });
+
+  test('star() is continuous in mass inside a phase (property): 1e-5 dex in mass moves log L by < 0.01 dex', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -0.9, max: 1.9, noNaN: true }), fc.double({ min: 0.05, max: 0.6, noNaN: true }), (lm, f) => {
+        const m = 10 ** lm;
+        const age = Math.min(f * 1e10 * m ** -2.5, 9.9e10);
+        const s1 = q.star(m, age, 0.014);
+        const s2 = q.star(m * 10 ** 1e-5, age, 0.014);
+        if (s1.phase !== s2.phase || s1.phase !== 'main-sequence') return true;
+        return Math.abs(Math.log10(s1.luminosity / s2.luminosity)) < 0.01;
+      }),
+      { seed: 7, numRuns: 200 },
+    );
+  });
+});
+
+describe('serializeGrid / deserializeGrid', () => {
+  test('a grid survives the binary cache round trip with identical answers', () => {
+    const again = createGridQuery(deserializeGrid(serializeGrid(grid)));
+    for (const [m, a] of [[0.5, 1e10], [1, 4.6e9], [3, 3e8], [20, 8e6]]) {
+      expect(again.star(m, a, 0.01)).toEqual(q.star(m, a, 0.01));
+    }
+  });
+});
