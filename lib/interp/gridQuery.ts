@@ -1,5 +1,7 @@
 import type { Grid, GridRun, GridSlab } from '../tracks/grid.js';
-import { REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+
+const INV_AGE_BIN_STEP = 1 / AGE_BIN_STEP;
 import { findInterval } from './bisect.js';
 import { locateMass, type MassBlend } from './massBlend.js';
 import { MAX_AGE } from '../model/limits.js';
@@ -53,7 +55,8 @@ export function allocateStateColumns(n: number): StateColumns {
 // scratch result of one slab evaluation: phase, mass, coreMass, logL, logTeff, logMsLifetime, remnantMass, remnant
 const R0 = new Float64Array(8);
 const R1 = new Float64Array(8);
-const LOG_TEFF_SUN = Math.log10(5772);
+const TEFF_SUN = 5772;
+const LOG_TEFF_SUN = Math.log10(TEFF_SUN);
 /** log10 of GM☉/R☉² in cgs (IAU 2015 nominal values): log g = this + log M − 2 log R. */
 const LOGG_SUN = Math.log10((1.3271244e20 / 6.957e8 ** 2) * 100);
 const BLACK_HOLE = PHASE_INDEX['black-hole'];
@@ -86,8 +89,16 @@ function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void
     j = 0;
     phi = 0;
   } else {
-    let lo = 0;
-    let hi = n - 1;
+    // narrow the search with the run's age index (see indexRunAges), then bisect
+    let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
+    if (bin < 0) bin = 0;
+    else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
+    const I = run.ageIndex;
+    const r0 = i * AGE_BINS + bin;
+    const r1 = u > 0 ? r0 + AGE_BINS : r0;
+    let lo = I[r0] < I[r1] ? I[r0] : I[r1];
+    let hi = I[r0 + 1] > I[r1 + 1] ? I[r0 + 1] : I[r1 + 1];
+    if (bin === AGE_BINS - 2) hi = n - 1;
     while (lo < hi) {
       const mid = (lo + hi + 1) >> 1;
       const x0 = a0i + 2 * mid;
@@ -231,15 +242,18 @@ export function createGridQuery(grid: Grid): GridQuery {
         o.phase[s] = ph;
         o.mass[s] = mass;
         o.coreMass[s] = R0[2];
-        o.radius[s] = exp10(logR);
         o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
         if (ph === BLACK_HOLE) {
           o.luminosity[s] = 0;
           o.teff[s] = 0;
           o.radius[s] = schwarzschildRadius(mass);
         } else {
-          o.luminosity[s] = exp10(R0[3]);
-          o.teff[s] = exp10(R0[4]);
+          const L = exp10(R0[3]);
+          const T = exp10(R0[4]);
+          const f = TEFF_SUN / T;
+          o.luminosity[s] = L;
+          o.teff[s] = T;
+          o.radius[s] = Math.sqrt(L) * f * f; // Stefan–Boltzmann, as logR
         }
         o.msLifetime[s] = R0[5] === 0 ? 0 : exp10(R0[5]);
         o.remnantMass[s] = R0[6];

@@ -1,5 +1,5 @@
 import type { GridRun, GridSlab } from '../tracks/grid.js';
-import { findInterval } from './bisect.js';
+import { MASS_BINS } from '../tracks/grid.js';
 
 /**
  * Where a mass falls in a metallicity slab and the cubic Hermite weights that blend the two
@@ -30,7 +30,17 @@ export interface MassBlend {
  */
 export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
   const logM = slab.logM;
-  let k = findInterval(logM, lm);
+  let k: number;
+  if (logM.length < 3) k = 0;
+  else {
+    // the mass index gives the last track at or below the bin's edge; step up within the bin
+    let b = Math.floor((lm - slab.massIndexMin) * slab.massIndexScale);
+    if (b < 0) b = 0;
+    else if (b > MASS_BINS) b = MASS_BINS;
+    k = slab.massIndex[b];
+    const last = logM.length - 2;
+    while (k < last && logM[k + 1] <= lm) k++;
+  }
   const ra = slab.runOf[k];
   if (ra === slab.runOf[k + 1]) {
     const run = slab.runs[ra];

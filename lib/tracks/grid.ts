@@ -31,10 +31,61 @@ export interface GridRun {
   ages: Float64Array;
   /** [(track·n + eep)·REC_STRIDE + REC.x] = column x, [+1] = its slope */
   rec: Float64Array;
+  /**
+   * Age index, [track·AGE_BINS + b] = the last EEP whose log age is ≤ AGE_BIN_MIN + b·AGE_BIN_STEP
+   * (0 when none): narrows the age search to a few EEPs (see indexRunAges).
+   */
+  ageIndex: Int16Array;
   /** per track: log10 msLifetime/yr (0 where the track has no main sequence) */
   logMsLifetime: Float64Array;
   remnantMass: Float64Array;
   remnant: number;
+}
+
+/** Age bins of {@link GridRun.ageIndex}: log10 age/yr from 2 to 12.5 in steps of 0.01 dex. */
+export const AGE_BIN_MIN = 2;
+export const AGE_BIN_STEP = 0.01;
+export const AGE_BINS = 1051;
+
+/**
+ * Builds a run's age index: for every track and age bin, the last EEP at or below the bin's
+ * lower edge. Because the monotone (Steffen) cubic in mass never leaves the range of its two
+ * nodes, an interpolated star's EEP for a log age in bin b lies between the smaller of its two
+ * tracks' entries at b and the larger at b + 1 — the age search then bisects only that span.
+ */
+export function indexRunAges(ages: Float64Array, n: number, count: number): Int16Array {
+  const idx = new Int16Array(count * AGE_BINS);
+  for (let k = 0; k < count; k++) {
+    let j = 0;
+    for (let b = 0; b < AGE_BINS; b++) {
+      const edge = AGE_BIN_MIN + b * AGE_BIN_STEP;
+      while (j + 1 < n && ages[2 * (k * n + j + 1)] <= edge) j++;
+      idx[k * AGE_BINS + b] = j;
+    }
+  }
+  return idx;
+}
+
+/** Bins of a slab's mass index. */
+export const MASS_BINS = 4096;
+
+/**
+ * A slab's mass index: MASS_BINS equal bins in log M over the slab's range, each holding the
+ * last track at or below its lower edge, so that locating a mass costs a lookup and a step or
+ * two instead of a bisection.
+ */
+export function indexSlabMasses(logM: Float64Array): { massIndex: Int32Array; massIndexMin: number; massIndexScale: number } {
+  const n = logM.length;
+  const lo = logM[0];
+  const scale = n > 1 ? MASS_BINS / (logM[n - 1] - lo) : 0;
+  const massIndex = new Int32Array(MASS_BINS + 1);
+  let k = 0;
+  for (let b = 0; b <= MASS_BINS; b++) {
+    const edge = lo + b / scale;
+    while (k + 1 < n - 1 && logM[k + 1] <= edge) k++;
+    massIndex[b] = k;
+  }
+  return { massIndex, massIndexMin: lo, massIndexScale: scale };
 }
 
 /** All tracks of one metallicity, sorted by initial mass. */
@@ -43,6 +94,10 @@ export interface GridSlab {
   logZ: number;
   /** log10 initial mass of every track */
   logM: Float64Array;
+  /** mass index: [b] = the last track whose log M ≤ the lower edge of bin b (see indexSlabMasses) */
+  massIndex: Int32Array;
+  massIndexMin: number;
+  massIndexScale: number;
   /** run index and position in the run of every track */
   runOf: Int32Array;
   indexInRun: Int32Array;
@@ -116,7 +171,8 @@ function buildSlab(z: number, list: EepTrack[], source: string): GridSlab {
       start = i;
     }
   }
-  return { z, logZ: Math.log10(z), logM: Float64Array.from(tracks.map((t) => Math.log10(t.initialMass))), runOf, indexInRun, runs };
+  const logM = Float64Array.from(tracks.map((t) => Math.log10(t.initialMass)));
+  return { z, logZ: Math.log10(z), logM, ...indexSlabMasses(logM), runOf, indexInRun, runs };
 }
 
 function buildRun(members: EepTrack[]): GridRun {
@@ -145,6 +201,7 @@ function buildRun(members: EepTrack[]): GridRun {
     logM,
     ages,
     rec,
+    ageIndex: indexRunAges(ages, n, count),
     logMsLifetime: Float64Array.from(members.map((t) => (t.msLifetime > 0 ? Math.log10(t.msLifetime) : 0))),
     remnantMass: Float64Array.from(members.map((t) => t.remnantMass)),
     remnant: REMNANT_CODES.indexOf(members[0].remnant),

@@ -1,4 +1,4 @@
-import { REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
+import { indexRunAges, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
 
 const MAGIC = 'starclock-grid-cache 1';
 const RUN_F64 = ['logM', 'ages', 'rec', 'logMsLifetime', 'remnantMass'] as const;
@@ -86,18 +86,19 @@ export function deserializeGrid(bytes: Uint8Array): Grid {
       const cn = hr.count * hr.n;
       const run: GridRun = {
         layout: hr.layout, n: hr.n, count: hr.count, remnant: hr.remnant,
-        logM: f(hr.count), ages: f(2 * cn), rec: f(REC_STRIDE * cn),
+        logM: f(hr.count), ages: f(2 * cn), rec: f(REC_STRIDE * cn), ageIndex: new Int16Array(0),
         logMsLifetime: f(hr.count), remnantMass: f(hr.count),
         phase: new Uint8Array(bytes.buffer, off, hr.n),
       };
       off += Math.ceil(hr.n / 8) * 8;
+      run.ageIndex = indexRunAges(run.ages, run.n, run.count);
       for (let k = 0; k < hr.count; k++, t++) {
         runOf[t] = ri;
         indexInRun[t] = k;
       }
       return run;
     });
-    return { z: hs.z, logZ: Math.log10(hs.z), logM, runOf, indexInRun, runs };
+    return { z: hs.z, logZ: Math.log10(hs.z), logM, ...indexSlabMasses(logM), runOf, indexInRun, runs };
   });
   return { slabs, logZ: Float64Array.from(slabs.map((s) => s.logZ)), massRange: header.massRange, zRange: header.zRange, source: header.source };
 }
