@@ -2,6 +2,7 @@ import { generateTrack } from '../model/generateTrack.js';
 import { MASS_RANGE } from '../model/limits.js';
 import { resampleEeps } from './resampleEeps.js';
 import type { EepTrack } from './eepTrack.js';
+import type { Track } from './track.js';
 
 /** Metal fractions of the built-in grid: 1e-4 to 0.03, about 0.25–0.4 dex apart. */
 export const BUILTIN_Z = [0.0001, 0.0002, 0.0005, 0.001, 0.002, 0.004, 0.007, 0.01, 0.014, 0.02, 0.03] as const;
@@ -25,27 +26,33 @@ export function builtinGridMasses(): number[] {
 }
 
 /**
- * The built-in grid's EEP tracks at one metallicity, from the analytic model (full lives,
- * resampled onto EEPs), with the boundary pairs described at {@link builtinGridMasses}.
+ * The built-in grid's tracks at one metallicity, from the analytic model (full lives), with
+ * the boundary pairs described at {@link builtinGridMasses}: the tracks `grid export` writes.
  */
-export function builtinGridTracks(z: number): EepTrack[] {
-  const eep = (m: number) => resampleEeps(generateTrack(m, z, { fullLife: true }));
-  const base = builtinGridMasses().map(eep);
-  const extra: EepTrack[] = [];
+export function builtinRawTracks(z: number): Track[] {
+  const gen = (m: number) => generateTrack(m, z, { fullLife: true });
+  const layoutOf = (t: Track) => resampleEeps(t).layout;
+  const base = builtinGridMasses().map(gen);
+  const layouts = base.map(layoutOf);
+  const extra: Track[] = [];
   for (let i = 1; i < base.length; i++) {
-    if (base[i].layout === base[i - 1].layout) continue;
+    if (layouts[i] === layouts[i - 1]) continue;
     let a = Math.log10(base[i - 1].initialMass);
     let b = Math.log10(base[i].initialMass);
-    const layoutA = base[i - 1].layout;
     while (b - a > 2e-4) {
       const mid = 0.5 * (a + b);
-      if (eep(10 ** mid).layout === layoutA) a = mid;
+      if (layoutOf(gen(10 ** mid)) === layouts[i - 1]) a = mid;
       else b = mid;
     }
-    const ta = eep(10 ** a);
-    const tb = eep(10 ** b);
-    if (ta.layout === layoutA) extra.push(ta);
-    if (tb.layout === base[i].layout) extra.push(tb);
+    const ta = gen(10 ** a);
+    const tb = gen(10 ** b);
+    if (layoutOf(ta) === layouts[i - 1]) extra.push(ta);
+    if (layoutOf(tb) === layouts[i]) extra.push(tb);
   }
   return [...base, ...extra].sort((p, q) => p.initialMass - q.initialMass);
+}
+
+/** The built-in grid's EEP tracks at one metallicity (builtinRawTracks, resampled). */
+export function builtinGridTracks(z: number): EepTrack[] {
+  return builtinRawTracks(z).map(resampleEeps);
 }

@@ -117,7 +117,7 @@ export function resampleEeps(track: Track): EepTrack {
     pushRaw(b);
   }
   const primary = track.eeps.map((e) => ({ name: e.name, index: rawIndexToEep.get(e.index) ?? 0 }));
-  const ignition = track.events.some((e) => e.event === 'helium-flash') ? 'flash' : track.events.some((e) => e.event === 'helium-ignition') ? 'quiet' : 'none';
+  const ignition = heliumIgnitionKind(track);
   const layout = `${sig.join(',')};${primary.map((p) => p.name).join(',')};${ignition};${track.remnant}`;
   return {
     initialMass: track.initialMass,
@@ -135,4 +135,24 @@ export function resampleEeps(track: Track): EepTrack {
     remnant: track.remnant,
     remnantMass: track.remnantMass,
   };
+}
+
+const RGB = PHASES.indexOf('red-giant-branch');
+const CHEB = PHASES.indexOf('core-helium-burning');
+
+/**
+ * How helium ignited, read from the track itself so that a grid file (which carries no
+ * events) gives the same layouts as the model: 'flash' when the luminosity falls by more than
+ * a factor 3 from the red-giant tip to the start of helium burning — the degenerate core's
+ * flash lifts its degeneracy and the star settles on the horizontal branch at a few per cent
+ * of the tip luminosity (e.g. Kippenhahn, Weigert & Weiss 2012, §33) — 'quiet' for a smaller
+ * drop, 'none' without a red-giant-to-helium-burning step.
+ */
+export function heliumIgnitionKind(track: Track): 'flash' | 'quiet' | 'none' {
+  for (let i = 1; i < track.n; i++) {
+    if (track.phase[i] === CHEB && track.phase[i - 1] === RGB) {
+      return track.logL[i - 1] - track.logL[i] > Math.log10(3) ? 'flash' : 'quiet';
+    }
+  }
+  return 'none';
 }
