@@ -26,3 +26,21 @@ export function brownDwarfCooling(age: number, mass: number, zRatio: number): { 
     teff: 1550 * t ** -0.32 * m ** 0.83 * k ** 0.088,
   };
 }
+
+/**
+ * Brown-dwarf radius, Rsun: R ≈ 0.1 Rsun (M/0.05 Msun)^(-1/8) (t/Gyr)^(-0.04). Electron
+ * degeneracy makes brown dwarfs nearly the same size whatever their mass (a fully degenerate
+ * n = 1.5 polytrope has R ∝ M^(-1/3); Coulomb forces flatten it toward Jupiter's radius at low
+ * mass — Burrows & Liebert 1993, Rev. Mod. Phys. 65, 301, §III), shrinking slowly as they
+ * cool. The exponents are this model's calibration to cooling-model radii (from memory:
+ * ≈ 1.1 R_J at 0.013 Msun and ≈ 0.9 R_J at 0.07 Msun over 1–10 Gyr; Chabrier & Baraffe 2000,
+ * ARA&A 38, 337). The track takes L from {@link brownDwarfCooling} and this radius, and Teff
+ * from Stefan–Boltzmann.
+ *
+ * @param age yr (held at 1 Myr below it)
+ * @param mass Msun
+ * @example brownDwarfRadius(1e9, 0.05) // 0.1
+ */
+export function brownDwarfRadius(age: number, mass: number): number {
+  return 0.1 * (mass / 0.05) ** (-1 / 8) * (Math.max(age, 1e6) / 1e9) ** -0.04;
+}

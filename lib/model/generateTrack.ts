@@ -10,7 +10,7 @@ import {
 import { luminousBlueVariableRate, nieuwenhuijzenDeJagerRate, reimersRate, vassiliadisWoodRate, wolfRayetRate } from './massLoss.js';
 import { CHANDRASEKHAR_MASS, mestelCoolingAge, mestelLuminosity, nauenbergRadius } from './whiteDwarf.js';
 import { coreCollapseRemnant } from './coreCollapseRemnant.js';
-import { brownDwarfCooling, HYDROGEN_BURNING_LIMIT } from './brownDwarf.js';
+import { brownDwarfCooling, brownDwarfRadius, HYDROGEN_BURNING_LIMIT } from './brownDwarf.js';
 import { NEUTRON_STAR_RADIUS, neutronStarTeff, schwarzschildRadius } from './neutronStar.js';
 import type { Track } from '../tracks/track.js';
 import type { RemnantKind } from './phases.js';
@@ -144,8 +144,9 @@ function brownDwarfTrack(b: TrackBuilder, m: number, z: number): Track {
   const n = 60;
   for (let i = 0; i <= n; i++) {
     const age = 10 ** (5 + (6 * i) / n);
-    const { luminosity, teff } = brownDwarfCooling(age, m, zr);
-    b.push(age, m, 0, Math.log10(luminosity), Math.log10(teff), 'brown-dwarf');
+    const { luminosity } = brownDwarfCooling(age, m, zr);
+    const logL = Math.log10(luminosity);
+    b.push(age, m, 0, logL, logTeffOf(logL, Math.log10(brownDwarfRadius(age, m))), 'brown-dwarf');
     if (i === 0) b.mark('pms-start');
   }
   return b.build(0, 'brown-dwarf', m);
