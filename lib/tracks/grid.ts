@@ -133,7 +133,14 @@ export function buildGrid(tracks: readonly EepTrack[], source: string): Grid {
     byZ.set(t.z, list);
   }
   const zs = [...byZ.keys()].sort((a, b) => a - b);
-  const slabs = zs.map((z) => buildSlab(z, byZ.get(z)!, source));
+  return gridOfSlabs(zs.map((z) => buildSlab(z, byZ.get(z)!, source)), source);
+}
+
+/**
+ * A grid made of ready slabs (sorted by z): the log Z nodes and the mass and z ranges
+ * derived from them. The initial masses of the whole slabs, min to max, are the mass range.
+ */
+export function gridOfSlabs(slabs: GridSlab[], source: string): Grid {
   let mmin = Infinity;
   let mmax = -Infinity;
   for (const s of slabs) {
@@ -144,7 +151,7 @@ export function buildGrid(tracks: readonly EepTrack[], source: string): Grid {
     slabs,
     logZ: Float64Array.from(slabs.map((s) => s.logZ)),
     massRange: { min: mmin, max: mmax },
-    zRange: { min: zs[0], max: zs[zs.length - 1] },
+    zRange: { min: slabs[0].z, max: slabs[slabs.length - 1].z },
     source,
   };
 }

@@ -1,4 +1,4 @@
-import { indexRunAges, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
+import { gridOfSlabs, indexRunAges, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
 
 const MAGIC = 'starclock-grid-cache 1';
 const RUN_F64 = ['logM', 'ages', 'rec', 'logMsLifetime', 'remnantMass'] as const;
@@ -100,5 +100,5 @@ export function deserializeGrid(bytes: Uint8Array): Grid {
     });
     return { z: hs.z, logZ: Math.log10(hs.z), logM, ...indexSlabMasses(logM), runOf, indexInRun, runs };
   });
-  return { slabs, logZ: Float64Array.from(slabs.map((s) => s.logZ)), massRange: header.massRange, zRange: header.zRange, source: header.source };
+  return gridOfSlabs(slabs, header.source);
 }

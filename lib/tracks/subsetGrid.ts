@@ -1,4 +1,4 @@
-import type { Grid } from './grid.js';
+import { gridOfSlabs, type Grid } from './grid.js';
 
 /**
  * The part of a grid needed for metallicities in [zMin, zMax]: the slabs inside the range
@@ -18,18 +18,5 @@ export function subsetGrid(grid: Grid, zMin: number, zMax: number): Grid {
   while (lo + 1 < zs.length && zs[lo + 1] <= zMin) lo++;
   let hi = zs.length - 1;
   while (hi - 1 >= 0 && zs[hi - 1] >= zMax) hi--;
-  const slabs = grid.slabs.slice(lo, hi + 1);
-  let mmin = Infinity;
-  let mmax = -Infinity;
-  for (const s of slabs) {
-    mmin = Math.min(mmin, 10 ** s.logM[0]);
-    mmax = Math.max(mmax, 10 ** s.logM[s.logM.length - 1]);
-  }
-  return {
-    slabs,
-    logZ: Float64Array.from(slabs.map((s) => s.logZ)),
-    massRange: { min: mmin, max: mmax },
-    zRange: { min: slabs[0].z, max: slabs[slabs.length - 1].z },
-    source: grid.source,
-  };
+  return gridOfSlabs(grid.slabs.slice(lo, hi + 1), grid.source);
 }
