@@ -2,12 +2,17 @@ import { Command, CommanderError } from 'commander';
 import { demoCommand } from './commands/demo.js';
 import { lifeCommand } from './commands/life.js';
 import { starCommand } from './commands/star.js';
+import { batchCommand } from './commands/batch.js';
+import { RowsRejected } from './rowsRejected.js';
+import { trackCommand } from './commands/track.js';
+import { isochroneCommand } from './commands/isochrone.js';
+import { gridCommand } from './commands/grid.js';
 import type { Io } from './io.js';
 import { diagnostic, processIo } from './io.js';
 import { packageInfo } from './packageRoot.js';
 
 /** Exit codes: the one place they are decided. */
-export const EXIT = Object.freeze({ ok: 0, failure: 1, badInput: 2 });
+export const EXIT = Object.freeze({ ok: 0, failure: 1, badInput: 2, rowsRejected: 3 });
 
 /** The commander program with every subcommand, writing through `io`. */
 export function createProgram(io: Io): Command {
@@ -19,6 +24,10 @@ export function createProgram(io: Io): Command {
     .helpOption('-h, --help', 'show help')
     .addCommand(starCommand(io))
     .addCommand(lifeCommand(io))
+    .addCommand(trackCommand(io))
+    .addCommand(isochroneCommand(io))
+    .addCommand(gridCommand(io))
+    .addCommand(batchCommand(io))
     .addCommand(demoCommand(io));
   // addCommand does not pass settings down, so every command gets the same output and exit handling.
   const configure = (command: Command): void => {
@@ -51,7 +60,8 @@ function commanderMessage(error: CommanderError): string {
  * Runs the command line and returns the exit code; never exits the process.
  * 0 ok (and --help, --version); 2 bad input — a usage error, a rejected option
  * value, or a RangeError/TypeError from the core — with one line
- * `starclock: <message>` on stderr; 1 any other failure, also one line.
+ * `starclock: <message>` on stderr; 3 the output is written but some input rows were
+ * rejected (RowsRejected); 1 any other failure, also one line.
  *
  * @param argv the arguments after the program name (`process.argv.slice(2)`)
  * @param io where output and diagnostics go (default: the process's streams)
@@ -71,6 +81,11 @@ export async function main(argv: readonly string[], io: Io = processIo): Promise
     if (error instanceof RangeError || error instanceof TypeError) {
       diagnostic(io, error.message);
       return EXIT.badInput;
+    }
+    // Output written whole, but some input rows could not be used (batch).
+    if (error instanceof RowsRejected) {
+      diagnostic(io, error.message);
+      return EXIT.rowsRejected;
     }
     diagnostic(io, error instanceof Error ? error.message : String(error));
     if (process.env.STARCLOCK_DEBUG && error instanceof Error && error.stack) io.err(error.stack + '\n');

@@ -108,3 +108,97 @@ export function resolveZ(options: { z?: number; feh?: number }): number {
 export function wantsJson(options: { json?: boolean; format?: string }): boolean {
   return options.json === true || options.format === 'json';
 }
+
+// ── Options of the grid-backed commands (star, track, isochrone, grid) ──────────────────────
+
+/** `--mass` for commands that may use a user grid: any number here; the range is checked by checkMass. */
+export function parseMassNumber(text: string): number {
+  return number('--mass', text, `${MASS_TEXT}, or the --grid file's range`);
+}
+
+/** `--z` for commands that may use a user grid: any number here; the range is checked by checkZ. */
+export function parseZNumber(text: string): number {
+  return number('--z', text, `${Z_TEXT}, or the --grid file's range`);
+}
+
+/** A mass or metallicity range with the words that name it in messages. */
+export interface NamedRange {
+  min: number;
+  max: number;
+  /** e.g. "the valid range" or "the range of grid mygrid.csv" */
+  name: string;
+}
+
+/** Shortest text of a range end (the built-in grid's upper mass is 150.00000000000003 as a double). */
+export const rangeEnd = (x: number): string => String(Number(x.toPrecision(6)));
+
+/** The option values as typed, for messages (filled by the parsers of gridMassOption and gridZOption). */
+export type TypedValues = Record<string, string>;
+
+/** Throws RangeError naming --mass, its value as typed and `range` when the mass is outside it. */
+export function checkMass(mass: number, typed: TypedValues, range: NamedRange): void {
+  if (!(mass >= range.min && mass <= range.max)) {
+    throw new RangeError(`--mass ${typed.mass ?? mass} is outside ${range.name} ${rangeEnd(range.min)}–${rangeEnd(range.max)} Msun`);
+  }
+}
+
+/** Throws RangeError naming the z (or the --feh it came from), its value as typed and `range` when z is outside it. */
+export function checkZ(z: number, options: { z?: number; feh?: number }, typed: TypedValues, range: NamedRange): void {
+  if (z >= range.min && z <= range.max) return;
+  const what = options.z === undefined && options.feh !== undefined ? `--feh ${options.feh} (z ${rangeEnd(z)})` : `--z ${typed.z ?? z}`;
+  const span = range.min === range.max ? `${rangeEnd(range.min)} only` : `${rangeEnd(range.min)}–${rangeEnd(range.max)}`;
+  throw new RangeError(`${what} is outside ${range.name} ${span}`);
+}
+
+/** `--count`: a whole number of stars, 2–100000. */
+export function parseCount(text: string): number {
+  const n = number('--count', text, '2–100000');
+  if (!Number.isInteger(n) || n < 2 || n > 100000) {
+    throw new InvalidArgumentError(`--count ${text} must be a whole number in the valid range 2–100000`);
+  }
+  return n;
+}
+
+/** `--z` of `grid export`: one metal fraction or several separated by commas. */
+export function parseZList(text: string): number[] {
+  const parts = text.split(',').map((s) => s.trim());
+  return parts.map((part) => {
+    try {
+      return parseNumber(part);
+    } catch {
+      throw new InvalidArgumentError(`--z '${part}' is not a number; give built-in metallicities separated by commas, e.g. 0.014,0.004`);
+    }
+  });
+}
+
+/** `--mass` whose range depends on --grid; the text as typed is kept in `typed.mass` for checkMass. */
+export const gridMassOption = (typed: TypedValues): Option =>
+  new Option('--mass <Msun>', `birth (initial) mass in Msun, ${MASS_TEXT} (with --grid: the grid's mass range)`)
+    .argParser((text: string) => {
+      typed.mass = text;
+      return parseMassNumber(text);
+    })
+    .makeOptionMandatory();
+
+/** `--z` whose range depends on --grid; the text as typed is kept in `typed.z` for checkZ. */
+export const gridZOption = (typed: TypedValues): Option =>
+  new Option('--z <Z>', `metal mass fraction, ${Z_TEXT} (default ${SOLAR_Z}, solar; with --grid: the grid's range)`)
+    .argParser((text: string) => {
+      typed.z = text;
+      return parseZNumber(text);
+    })
+    .conflicts('feh');
+
+export const gridOption = (): Option =>
+  new Option('--grid <file>', 'interpolate in the track grid in FILE (open layout; see `starclock grid check --help`) instead of the built-in grid');
+
+export const exactOption = (): Option =>
+  new Option('--exact', 'build the track for exactly this mass and z with the analytic model instead of interpolating in a grid').conflicts('grid');
+
+export const dataFormatOption = (): Option =>
+  new Option('--format <kind>', 'output format').choices(['table', 'csv', 'json']).default('table');
+
+export const countOption = (): Option =>
+  new Option('--count <N>', 'number of log-spaced initial masses, 2–100000 (more are added near the turnoff)')
+    .argParser(parseCount)
+    .default(300);
