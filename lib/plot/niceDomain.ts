@@ -1,0 +1,31 @@
+import { niceStep } from './niceStep.js';
+
+/**
+ * Widens [lo, hi] outwards to multiples of its nice tick step, so the axis starts and ends on a
+ * tick. Repeated until stable (widening can change the step), at most a few times.
+ *
+ * @param lo domain start
+ * @param hi domain end, ≥ lo
+ * @param count wanted number of intervals (default 6)
+ * @returns the widened domain; a degenerate domain is first opened to lo − 0.5, hi + 0.5
+ * @throws RangeError as niceStep
+ * @example niceDomain(3.42, 4.71, 6) // [3.4, 4.8]
+ */
+export function niceDomain(lo: number, hi: number, count = 6): [number, number] {
+  let a = lo;
+  let b = hi;
+  if (a === b) {
+    a -= 0.5;
+    b += 0.5;
+  }
+  for (let i = 0; i < 4; i++) {
+    const step = niceStep(a, b, count);
+    const inverse = step < 1 ? Math.round(1 / step) : 0;
+    const na = inverse > 0 ? Math.floor(a * inverse + 1e-9) / inverse : Math.floor(a / step + 1e-9) * step;
+    const nb = inverse > 0 ? Math.ceil(b * inverse - 1e-9) / inverse : Math.ceil(b / step - 1e-9) * step;
+    if (na === a && nb === b) break;
+    a = na;
+    b = nb;
+  }
+  return [a, b];
+}
