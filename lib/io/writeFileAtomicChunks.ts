@@ -36,7 +36,10 @@ export async function writeFileAtomicChunks(
   const handle = await open(temporary, 'wx');
   try {
     try {
-      for await (const chunk of chunks) await handle.write(chunk);
+      for await (const chunk of chunks) {
+        if (typeof chunk === 'string') await handle.write(chunk);
+        else await handle.write(chunk);
+      }
       await handle.sync();
     } finally {
       await handle.close();
