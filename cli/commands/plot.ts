@@ -175,7 +175,7 @@ Examples:
       const source = await resolveSource(options, io);
       checkZ(z, options, typed, source.zRange);
       const query = source.query as GridQuery;
-      const maxMass = options.maxMass ?? query.grid.massRange.max;
+      const maxMass = options.maxMass ?? Math.min(source.massRange.max, query.grid.massRange.max);
       const bound = (option: string, m: number) => {
         const r = source.massRange;
         if (!(m >= r.min && m <= r.max)) throw new RangeError(`${option} ${m} is outside ${r.name} ${rangeEnd(r.min)}–${rangeEnd(r.max)} Msun`);

@@ -21,8 +21,15 @@ export function niceDomain(lo: number, hi: number, count = 6): [number, number] 
   for (let i = 0; i < 4; i++) {
     const step = niceStep(a, b, count);
     const inverse = step < 1 ? Math.round(1 / step) : 0;
-    const na = inverse > 0 ? Math.floor(a * inverse + 1e-9) / inverse : Math.floor(a / step + 1e-9) * step;
-    const nb = inverse > 0 ? Math.ceil(b * inverse - 1e-9) / inverse : Math.ceil(b / step - 1e-9) * step;
+    // Exact floor and ceil (no tolerance): the widened domain must hold the input, so a
+    // rounding that lands a hair inside moves one step further out.
+    const down = (k: number) => (inverse > 0 ? k / inverse : k * step);
+    let ka = Math.floor(inverse > 0 ? a * inverse : a / step);
+    if (down(ka) > a) ka -= 1;
+    let kb = Math.ceil(inverse > 0 ? b * inverse : b / step);
+    if (down(kb) < b) kb += 1;
+    const na = down(ka) || 0; // no -0
+    const nb = down(kb) || 0;
     if (na === a && nb === b) break;
     a = na;
     b = nb;

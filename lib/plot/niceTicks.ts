@@ -19,8 +19,8 @@ export function niceTicks(lo: number, hi: number, count = 6): number[] {
   const inverse = step < 1 ? Math.round(1 / step) : 0;
   const at = (k: number) => (inverse > 0 ? k / inverse : k * step);
   // A margin of 1e-9 steps keeps ends that are multiples of the step despite rounding of lo and hi.
-  const k0 = Math.ceil(lo / step - 1e-9);
-  const k1 = Math.floor(hi / step + 1e-9);
+  const k0 = Math.ceil((inverse > 0 ? lo * inverse : lo / step) - 1e-9);
+  const k1 = Math.floor((inverse > 0 ? hi * inverse : hi / step) + 1e-9);
   const ticks: number[] = [];
   for (let k = k0; k <= k1; k++) {
     const v = at(k);

@@ -51,7 +51,7 @@ export function populationFigure(points: PopulationPoints, text: FigureText): st
     all.sort((a, b) => points.logL[a] - points.logL[b] || a - b);
     order = Int32Array.from(all);
   }
-  const r = thinned ? 1.3 : drawn > 2000 ? 1.6 : 2.4;
+  const r = thinned ? 1.7 : drawn > 2000 ? 1.8 : 2.6;
   const stroke = thinned || drawn > 2000 ? 0.25 : 0.4;
   const dots: string[] = [`<g class="stars" stroke="#555555" stroke-width="${stroke}">`];
   for (let k = 0; k < order.length; k++) {
@@ -72,7 +72,7 @@ export function populationFigure(points: PopulationPoints, text: FigureText): st
     rows.push({ swatch: '', label: '' });
     if (ns > 0) rows.push({ swatch: '', label: 'neutron-star', value: count(ns) });
     if (bh > 0) rows.push({ swatch: '', label: 'black-hole', value: count(bh) });
-    rows.push({ swatch: '', label: '(counted, not drawn: off the diagram or dark)', kind: 'legend-note' });
+    rows.push({ swatch: '', label: '(counted, not drawn)', kind: 'legend-note' });
   }
   rows.push({ swatch: '', label: '' });
   rows.push({ swatch: '', label: 'all stars', value: count(points.total), kind: 'legend-note' });
