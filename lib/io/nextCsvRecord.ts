@@ -37,7 +37,7 @@ export function nextCsvRecord(text: string, start: number, lineMode: boolean, ou
   const nl = text.indexOf('\n', start);
   const lineEnd = nl < 0 ? n : nl;
   const next = nl < 0 ? n : nl + 1;
-  const crlf = lineEnd > start && text.charCodeAt(lineEnd - 1) === 13;
+  const crlf = nl >= 0 && lineEnd > start && text.charCodeAt(lineEnd - 1) === 13;
   const plainEnd = crlf ? lineEnd - 1 : lineEnd;
   const line = text.slice(start, plainEnd);
   if (line.indexOf('"') < 0) {
@@ -80,7 +80,7 @@ export function nextCsvRecord(text: string, start: number, lineMode: boolean, ou
       if (closed) {
         // after the closing quote: a comma, the end of the record, or (malformed) more text
         const c = text.charCodeAt(i);
-        if (!(i >= n || c === 44 || c === 10 || (c === 13 && (i + 1 >= n || text.charCodeAt(i + 1) === 10)))) {
+        if (!(i >= n || c === 44 || c === 10 || (c === 13 && text.charCodeAt(i + 1) === 10))) {
           error ??= `field ${fields.length + 1}: text after the closing quote`;
           let j = i;
           while (j < n) {

@@ -5,6 +5,7 @@ import { PHASES } from '../model/phases.js';
 import { zFromFeh } from '../model/zFromFeh.js';
 import { observe, type ObservedKind, type Observables } from '../physics/observe.js';
 import { REMNANT_CODES } from '../tracks/grid.js';
+import { surfaceGravity } from '../physics/surfaceGravity.js';
 import type { BatchPlan } from './batchPlan.js';
 import { emptyCsvRecord, nextCsvRecord } from './nextCsvRecord.js';
 import { parseAge } from './parseAge.js';
@@ -50,6 +51,7 @@ const CODE: Readonly<Record<string, number>> = {
 const KIND: readonly ObservedKind[] = PHASES.map((p) =>
   p === 'white-dwarf' || p === 'neutron-star' || p === 'black-hole' || p === 'brown-dwarf' ? p : 'star',
 );
+const BLACK_HOLE = PHASES.indexOf('black-hole');
 const NUMBER = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
 const HAS_LETTER = /[A-Za-z]/;
 const ENCODER = new TextEncoder();
@@ -233,7 +235,7 @@ export function processBatchChunk(text: string, plan: BatchPlan, query: GridQuer
       const raw = S.raw[s];
       if (reason === null && o.status[s] !== 0) reason = `internal: the grid refused this row (status ${o.status[s]})`;
       let obs: Observables | null = null;
-      if (reason === null && wantObs && o.phase[s] !== 9) {
+      if (reason === null && wantObs && o.phase[s] !== BLACK_HOLE) {
         try {
           obs = observe(KIND[o.phase[s]], o.luminosity[s], o.teff[s], o.radius[s], o.mass[s]);
         } catch (error) {
@@ -261,7 +263,8 @@ export function processBatchChunk(text: string, plan: BatchPlan, query: GridQuer
           case 6: cells[c] = o.luminosity[s]; break;
           case 7: cells[c] = o.teff[s]; break;
           case 8: cells[c] = o.radius[s]; break;
-          case 9: cells[c] = o.logg[s]; break;
+          // columns() derives a black hole's log g from L and Teff; star() from its Schwarzschild radius
+          case 9: cells[c] = o.phase[s] === BLACK_HOLE ? surfaceGravity(o.mass[s], o.radius[s]) : o.logg[s]; break;
           case 10: cells[c] = obs === null ? null : obs.spectralType; break;
           case 11: cells[c] = obs === null ? null : obs.bv; break;
           case 12: cells[c] = obs === null ? null : obs.mbol; break;
