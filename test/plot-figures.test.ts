@@ -154,7 +154,7 @@ describe('populationFigure(points, text)', () => {
     const lit = states.filter((s) => s.phase !== 'black-hole' && s.phase !== 'neutron-star');
     const svg = populationFigure(points, { title: 'Six stars', subtitle: [] });
     const root = expectFigure(svg, 'Six stars');
-    const dots = select(root, 'circle', 'star');
+    const dots = select(select(root, 'g', 'stars')[0], 'circle');
     expect(dots).toHaveLength(lit.length);
     // the dot colours are the states' own colours
     expect(dots.map((d) => d.attrs.fill).sort()).toEqual(lit.map((s) => s.color).sort());
@@ -179,7 +179,7 @@ describe('populationFigure(points, text)', () => {
     const points = populationPoints(query, { initialMass, age, z: Z });
     const svg = populationFigure(points, { title: 'Many', subtitle: [] });
     const root = expectFigure(svg, 'Many');
-    const dots = select(root, 'circle', 'star');
+    const dots = select(select(root, 'g', 'stars')[0], 'circle');
     expect(dots.length).toBeLessThan(points.logTeff.length);
     expect(dots.length).toBeGreaterThan(100);
     const cells = new Set(dots.map((d) => `${Math.floor((Number(d.attrs.cx) - 70) / 2)},${Math.floor((Number(d.attrs.cy) - 70) / 2)}`));

@@ -96,8 +96,10 @@ export async function writeFigure(io: Io, output: string, svg: string, inputs: r
   try {
     await writeFileAtomic(output, svg, inputs);
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === 'EINPUT') throw new RangeError(`-o ${output} is an input file of this run; choose another output file`);
-    throw error;
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'EINPUT') throw new RangeError(`-o ${output} is an input file of this run; choose another output file`);
+    if (code === 'ENOENT') throw new RangeError(`-o ${output}: its directory does not exist`);
+    throw new Error(`cannot write -o ${output}: ${(error as Error).message}`);
   }
   diagnostic(io, `wrote ${output} (${Math.ceil(Buffer.byteLength(svg) / 1024)} KB)`);
 }

@@ -18,8 +18,8 @@ export const DOT_CELL = 2;
 const count = (x: number) => x.toLocaleString('en-US');
 
 /**
- * An HR diagram of a population as an SVG document: each star with light a `<circle
- * class="star">` filled with its colour as seen (blackbodyColor of its Teff, the state's
+ * An HR diagram of a population as an SVG document: each star with light a `<circle>` (in
+ * `<g class="stars">`, no attribute per dot beyond position, radius and fill) filled with its colour as seen (blackbodyColor of its Teff, the state's
  * `color`), outlined thinly in grey so that white and pale stars — the white dwarfs above all —
  * show on the white page. Up to DOT_LIMIT stars every star is drawn; beyond, one dot per
  * DOT_CELL-px cell, the brightest star of the cell (decimateDots), and a subtitle line says
@@ -57,7 +57,7 @@ export function populationFigure(points: PopulationPoints, text: FigureText): st
   for (let k = 0; k < order.length; k++) {
     const i = order[k];
     const color = blackbodyColor(points.teff[i]);
-    dots.push(`<circle class="star" cx="${n(xs[i] + frame.left, 1)}" cy="${n(ys[i] + frame.top, 1)}" r="${r}" fill="${color}"/>`);
+    dots.push(`<circle cx="${n(xs[i] + frame.left, 1)}" cy="${n(ys[i] + frame.top, 1)}" r="${r}" fill="${color}"/>`);
   }
   dots.push('</g>');
   const rows: LegendRow[] = [];
