@@ -8,6 +8,7 @@ import { trackCommand } from './commands/track.js';
 import { isochroneCommand } from './commands/isochrone.js';
 import { gridCommand } from './commands/grid.js';
 import { plotCommand } from './commands/plot.js';
+import { viewCommand } from './commands/view.js';
 import type { Io } from './io.js';
 import { diagnostic, processIo } from './io.js';
 import { packageInfo } from './packageRoot.js';
@@ -30,6 +31,7 @@ export function createProgram(io: Io): Command {
     .addCommand(gridCommand(io))
     .addCommand(batchCommand(io))
     .addCommand(plotCommand(io))
+    .addCommand(viewCommand(io))
     .addCommand(demoCommand(io));
   // addCommand does not pass settings down, so every command gets the same output and exit handling.
   const configure = (command: Command): void => {
