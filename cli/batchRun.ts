@@ -436,8 +436,9 @@ export async function runBatch(options: BatchRunOptions, io: Io): Promise<BatchS
     if (progress) process.stderr.write('\r\x1b[K');
     await rejectsFile?.close();
     await outFile?.close();
-    await rejectsFile?.commit();
+    // the output first: if its rename fails, the rejects file is not left behind either
     await outFile?.commit();
+    await rejectsFile?.commit();
   } catch (error) {
     if (progress) process.stderr.write('\r\x1b[K');
     stream.destroy();
