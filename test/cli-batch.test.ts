@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { BIN, runMain } from './cli-run.js';
+import { BIN, ROOT, runMain } from './cli-run.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'starclock-batch-test-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -121,6 +121,22 @@ test('batch --workers 2 writes the same bytes as one thread, rejects included', 
   expect(readFileSync(two).equals(readFileSync(one))).toBe(true);
   expect(readFileSync(`${two}.rejects.csv`).equals(readFileSync(`${one}.rejects.csv`))).toBe(true);
   expect(readFileSync(`${one}.rejects.csv`, 'utf8').split('\n').length - 2).toBe(120);
+}, 120000);
+
+test('batch --grid FILE interpolates in a user grid and checks rows against its ranges', () => {
+  const grid = join(ROOT, 'tracks-demo', 'sample-grid.csv');
+  const r = run(['-', '--grid', grid, '--columns', 'phase'], 'mass,age_Gyr,z\n1,4.6,0.014\n1,4.6,0.02\n');
+  expect(r.code).toBe(3);
+  expect(r.stdout).toBe('mass,age_Gyr,z,phase\n1,4.6,0.014,main-sequence\n');
+  expect(r.stderr).toMatch(/row 3: column 'z': 0.02 is outside the valid range/);
+});
+
+test('batch reads the demo catalogue (initialMass, age_Gyr, z) with every row computed', () => {
+  const r = run([join(ROOT, 'tracks-demo', 'orvel-catalogue.csv'), '--columns', 'phase,spectralType']);
+  expect(r.code).toBe(0);
+  const lines = r.stdout.trimEnd().split('\n');
+  expect(lines[0]).toBe('name,initialMass,age_Gyr,z,note,phase,spectralType');
+  expect(lines.length).toBeGreaterThan(10);
 });
 
 test('batch refuses to write over its input, also through a symbolic link, and leaves it unchanged', () => {
