@@ -1,5 +1,3 @@
-import { once } from 'node:events';
-
 /** Where a run's output goes: data to `out`, diagnostics to `err`. Tests pass collectors. */
 export interface Io {
   out(text: string): void;
@@ -16,10 +14,17 @@ export const processIo: Io = {
   out: (text) => void process.stdout.write(text),
   err: (text) => void process.stderr.write(text),
   // A pipe to a slow reader buffers every write in memory; wait for it to empty.
-  drain: async () => {
-    if (!process.stdout.writableNeedDrain) return;
-    await Promise.race([once(process.stdout, 'drain'), once(process.stdout, 'close')]);
-  },
+  drain: () =>
+    new Promise<void>((resolve) => {
+      if (!process.stdout.writableNeedDrain) return resolve();
+      const done = () => {
+        process.stdout.off('drain', done);
+        process.stdout.off('close', done);
+        resolve();
+      };
+      process.stdout.on('drain', done);
+      process.stdout.on('close', done);
+    }),
 };
 
 /** Writes one diagnostic line, prefixed with the program's name. */
