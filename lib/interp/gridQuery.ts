@@ -75,7 +75,7 @@ const log10 = (x: number) => Math.log(x) * INV_LN10;
  */
 const MB: MassBlend = { run: undefined as unknown as GridRun, b0: 0, b1: 0, i: 0, u: 0, c00: 1, c01: 0, c10: 0, c11: 0 };
 
-function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void {
+function evalSlab(slab: GridSlab, lm: number, m: number, la: number, r: Float64Array): void {
   locateMass(slab, lm, MB);
   const { run, b0, b1, c00, c01, c10, c11, i, u } = MB;
   const n = run.n;
@@ -135,6 +135,8 @@ function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void
       e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
       g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
   }
+  r[1] *= m; // the grid holds masses as fractions of the initial mass
+  r[2] *= m;
   const ti = i + u;
   const t0 = Math.floor(ti);
   const tf = ti - t0;
@@ -149,24 +151,24 @@ function evalSlab(slab: GridSlab, lm: number, la: number, r: Float64Array): void
  * Evaluates the grid at (log M, log age, log Z) into R0: the two slabs bracketing log Z
  * are blended linearly in log Z when they agree on the phase, else the nearer one answers.
  */
-function evalGrid(grid: Grid, lm: number, la: number, lz: number): void {
+function evalGrid(grid: Grid, lm: number, m: number, la: number, lz: number): void {
   const slabs = grid.slabs;
   if (slabs.length === 1) {
-    evalSlab(slabs[0], lm, la, R0);
+    evalSlab(slabs[0], lm, m, la, R0);
     return;
   }
   const k = findInterval(grid.logZ, lz);
   let w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
   if (w <= 0) {
-    evalSlab(slabs[k], lm, la, R0);
+    evalSlab(slabs[k], lm, m, la, R0);
     return;
   }
   if (w >= 1) {
-    evalSlab(slabs[k + 1], lm, la, R0);
+    evalSlab(slabs[k + 1], lm, m, la, R0);
     return;
   }
-  evalSlab(slabs[k], lm, la, R0);
-  evalSlab(slabs[k + 1], lm, la, R1);
+  evalSlab(slabs[k], lm, m, la, R0);
+  evalSlab(slabs[k + 1], lm, m, la, R1);
   if (R0[0] !== R1[0] || R0[7] !== R1[7]) {
     if (w >= 0.5) R0.set(R1);
     return;
@@ -201,7 +203,7 @@ export function createGridQuery(grid: Grid): GridQuery {
     grid,
     star(initialMass: number, age: number, z: number): StarState {
       checkStar(initialMass, age, z);
-      evalGrid(grid, Math.log10(initialMass), Math.log10(age), Math.log10(z));
+      evalGrid(grid, Math.log10(initialMass), initialMass, Math.log10(age), Math.log10(z));
       return observeState(
         initialMass, z, age, R0[0], R0[1], R0[2], R0[3], R0[4],
         R0[5] === 0 ? 0 : 10 ** R0[5], REMNANT_CODES[R0[7]], R0[6],
@@ -235,7 +237,7 @@ export function createGridQuery(grid: Grid): GridQuery {
           o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
           continue;
         }
-        evalGrid(grid, log10(m), log10(age), zScalar ? lzScalar : log10(z));
+        evalGrid(grid, log10(m), m, log10(age), zScalar ? lzScalar : log10(z));
         const ph = R0[0];
         const mass = R0[1];
         const logR = 0.5 * R0[3] - 2 * (R0[4] - LOG_TEFF_SUN);

@@ -84,11 +84,21 @@ export function interpolatedTrack(grid: Grid, initialMass: number, z: number): I
     for (let j = 0; j < n; j++) x[j] = a.cols[j * 4 + c];
     return x;
   };
+  // Each EEP's age is its own cubic in mass; on a sparse grid the slope terms can put one
+  // EEP a little before the previous one, so the track keeps the running maximum.
   const age = new Float64Array(n);
-  for (let j = 0; j < n; j++) age[j] = 10 ** a.logAge[j];
+  let prev = -Infinity;
+  for (let j = 0; j < n; j++) {
+    prev = Math.max(prev, a.logAge[j]);
+    age[j] = 10 ** prev;
+  }
   const mass = col(REC.mass / 2);
   const coreMass = col(REC.coreMass / 2);
-  for (let j = 0; j < n; j++) if (coreMass[j] > mass[j]) coreMass[j] = mass[j];
+  for (let j = 0; j < n; j++) {
+    mass[j] *= initialMass; // stored as fractions of the initial mass
+    coreMass[j] *= initialMass;
+    if (coreMass[j] > mass[j]) coreMass[j] = mass[j];
+  }
   return {
     initialMass, z, n, age, mass, coreMass, logL: col(REC.logL / 2), logTeff: col(REC.logTeff / 2), phase: a.phase.slice(),
     msLifetime: a.msl === 0 ? 0 : 10 ** a.msl, remnant: REMNANT_CODES[a.remnant], remnantMass: a.rm,

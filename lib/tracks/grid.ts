@@ -12,6 +12,7 @@ export const REC = { mass: 0, coreMass: 2, logL: 4, logTeff: 6 } as const;
 
 /**
  * A run of tracks of one metallicity that share an EEP layout and are adjacent in mass:
+ * present mass and core mass are stored as fractions of the track's initial mass.
  * the unit the interpolator blends within. The hot loop decides the memory layout: `ages`
  * holds (log age, its slope) pairs per EEP, track-major, for the age bisection; `rec` holds
  * one record of REC_STRIDE numbers per EEP — mass, core mass, log L, log Teff, each followed
@@ -193,6 +194,14 @@ function buildRun(members: EepTrack[]): GridRun {
   const slope = new Float64Array(count * n);
   for (const c of cols) {
     for (let k = 0; k < count; k++) value.set(members[k][c], k * n);
+    // masses are blended as fractions of the initial mass: smooth across tracks, and the
+    // monotone cubic keeps a fraction ≤ 1 — a star never comes out heavier than at birth
+    if (c === 'mass' || c === 'coreMass') {
+      for (let k = 0; k < count; k++) {
+        const inv = 1 / members[k].initialMass;
+        for (let j = 0; j < n; j++) value[k * n + j] *= inv;
+      }
+    }
     runSlopes(logM, n, value, slope);
     const [dst, stride, off] = c === 'logAge' ? [ages, 2, 0] : [rec, REC_STRIDE, REC[c]];
     for (let p = 0; p < count * n; p++) {
