@@ -51,15 +51,13 @@ describe('starclock track --json', () => {
     expectTrackShape(track(args));
   });
 
-  // Known failures (lib/interp): (1) interpolated present mass can exceed the birth mass
-  // (40.00003 Msun on a 40 Msun track; see test/cli-star.test.ts); (2) each EEP's log age is a
-  // Hermite cubic in log mass with slope terms, not a convex blend, so ages need not increase
-  // from EEP to EEP — on the sparse sample grid, 1.1 Msun, the EEP after first-thermal-pulse is
-  // 74 kyr younger than it. Until the interpolator keeps both, test.fails.
-  test.fails.each([
-    { name: 'a massive star, built-in grid (mass > initialMass)', args: ['--mass', '40'] },
-    { name: 'a star from the sample grid (ages decrease after first-thermal-pulse)', args: ['--mass', '1.1', '--grid', 'tracks-demo/sample-grid.csv'] },
-  ])('$name: header keys, one point per EEP in age order, schema state on every point (known failure)', ({ args }) => {
+  // Two former failures, fixed in lib: the grid blends mass as a fraction of the initial mass
+  // (so a 40 Msun track never exceeds 40 Msun), and interpolatedTrack keeps EEP ages
+  // non-decreasing on sparse grids (each EEP's age is its own cubic in mass).
+  test.each([
+    { name: 'a massive star, built-in grid', args: ['--mass', '40'] },
+    { name: 'a star from the sample grid', args: ['--mass', '1.1', '--grid', 'tracks-demo/sample-grid.csv'] },
+  ])('$name: header keys, one point per EEP in age order, schema state on every point', ({ args }) => {
     expectTrackShape(track(args));
   });
 
