@@ -46,10 +46,10 @@
  * `slopes` and `breaks` belong to `power-law` only.
  *
  * `starFormation`: `kind` (required) one of
- * - `burst` with `duration` (required age ≥ 0): birth times uniform in [0, duration]; a burst
+ * - `burst` with `duration` (required age, 0 … 100 Gyr): birth times uniform in [0, duration]; a burst
  *   longer than `now` is cut at `now` (no star is born after now);
  * - `constant`: uniform in [0, now];
- * - `exponential` with `tau` (required age > 0): rate ∝ exp(−t/τ) over [0, now];
+ * - `exponential` with `tau` (required age, 0 < τ ≤ 1000 Gyr): rate ∝ exp(−t/τ) over [0, now];
  * - `table` with `points` (required, ≥ 2 pairs `[time, rate]`): times are ages ≥ 0, strictly
  *   increasing; rates finite ≥ 0 in any unit (only their ratios matter); the rate is linear
  *   between points and zero outside them, and only [0, now] is used; it must form some stars
