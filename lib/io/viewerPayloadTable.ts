@@ -113,7 +113,6 @@ export function readStarTable(text: string, options: { ageUnit?: string } = {}):
   }
   const unit = headerUnit ?? options.ageUnit ?? 'yr';
   const from: StarTable['ageUnit']['from'] = headerUnit ? 'header' : options.ageUnit ? 'option' : 'default';
-  const scale = TABLE_AGE_UNITS[unit];
   const zKey = header.includes('z') ? 'z' : null;
   const nameKey = header.includes('name') ? 'name' : null;
   const n = rows.length;
@@ -138,7 +137,8 @@ export function readStarTable(text: string, options: { ageUnit?: string } = {}):
     const a = row.get(ageKey);
     if (a === undefined || a.trim() === '') throw new RangeError(`table line ${row.line}: ${ageKey} is empty; need an age`);
     let years: number;
-    if (BARE_NUMBER.test(a)) years = Number(a) * scale;
+    // a bare number takes the column's unit, applied to the decimal text (exact, as parseAge does)
+    if (BARE_NUMBER.test(a)) years = parseAge(`${a.trim()}${unit}`);
     else {
       try {
         years = parseAge(a);

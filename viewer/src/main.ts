@@ -49,6 +49,8 @@ export interface ViewerHook {
   state(): ViewerState;
   play(): void;
   pause(): void;
+  /** where star `index` (its position in the input) is drawn now, in CSS px of the page, or null when it is not drawn */
+  locate(index: number): { x: number; y: number } | null;
   /** times the frame loop against a pixel-fill baseline (bench/viewer.ts) */
   benchmark(options?: BenchmarkOptions): Promise<BenchmarkResult>;
 }
@@ -111,7 +113,8 @@ class Viewer {
 
   diagramSize(): { width: number; height: number } {
     const width = Math.max(420, Math.min(1100, $('diagram-panel').clientWidth - 2));
-    return { width, height: Math.round(Math.max(320, Math.min(620, width * 0.62))) };
+    // room for the controls and the chart of counts below it on one screen
+    return { width, height: Math.round(Math.max(320, Math.min(620, width * 0.62, window.innerHeight - 400))) };
   }
 
   buildDiagram(): void {
@@ -216,7 +219,7 @@ class Viewer {
         y[i] = vy;
         prevRemnant = remnant;
       }
-      lines.push({ x, y, stroke: 'rgba(255,207,110,0.9)', width: 1.5, dash: [] });
+      lines.push({ x, y, stroke: 'rgba(255,207,110,0.6)', width: 1.25, dash: [] });
     }
     if (this.chosen >= 0 && showTrack) {
       const k = this.chosen;
@@ -235,9 +238,8 @@ class Viewer {
           x[j] = tr.logTeff[j];
           y[j] = tr.logL[j];
         } else {
-          const i = this.lut.index(tr.logTeff[j]);
-          x[j] = this.lut.bv[i];
-          y[j] = this.lut.mvAtUnitL[i] - 2.5 * tr.logL[j];
+          x[j] = this.lut.bvAt(tr.logTeff[j]);
+          y[j] = this.lut.mvAt(tr.logTeff[j], tr.logL[j]);
         }
       }
       lines.push({ x, y, stroke: 'rgba(127,224,200,0.85)', width: 1.25, dash: [5, 3] });
@@ -246,8 +248,8 @@ class Viewer {
       if (s < 0 || this.pop.columns.status[s] !== 0) continue;
       const c = this.pop.columns;
       if (c.phase[s] === PHASE_INDEX['black-hole']) continue;
-      const i = this.lut.index(Math.log10(c.teff[s]));
-      const [x, y] = this.point({ luminosity: c.luminosity[s], teff: c.teff[s], bv: this.lut.bv[i], mv: this.lut.mvAtUnitL[i] - 2.5 * Math.log10(c.luminosity[s]) });
+      const lt = Math.log10(c.teff[s]);
+      const [x, y] = this.point({ luminosity: c.luminosity[s], teff: c.teff[s], bv: this.lut.bvAt(lt), mv: this.lut.mvAt(lt, Math.log10(c.luminosity[s])) });
       rings.push({ x, y, stroke });
     }
     this.chart.setOverlays(lines, rings);
@@ -288,6 +290,7 @@ class Viewer {
     const s = this.hovered >= 0 ? this.hovered : this.pinned >= 0 ? this.pinned : this.chosen;
     const dl = $('star-info').querySelector('dl') as HTMLDListElement;
     dl.textContent = '';
+    ($('star-info').querySelector('.hint') as HTMLElement).hidden = s >= 0;
     if (s < 0) return;
     const i = this.pop.inputIndex[s];
     const names = this.payload.stars.name;
@@ -368,6 +371,18 @@ class Viewer {
       turnoffMass: this.iso ? this.iso.turnoffMass : null,
       chosen: this.chosen >= 0 ? this.pop.inputIndex[this.chosen] : null,
     };
+  }
+
+  locate(index: number): { x: number; y: number } | null {
+    if (!(Number.isInteger(index) && index >= 0 && index < this.pop.n)) {
+      throw new RangeError(`locate: star ${index} outside 0–${this.pop.n - 1}`);
+    }
+    let s = -1;
+    for (let k = 0; k < this.pop.n; k++) if (this.pop.inputIndex[k] === index) s = k;
+    if (s < 0 || this.chart.drawn.mark[s] === 0) return null;
+    const rect = this.chart.plot.over.getBoundingClientRect();
+    const r = devicePixelRatio;
+    return { x: rect.left + (this.chart.drawn.x[s] + 0.5) / r, y: rect.top + (this.chart.drawn.y[s] + 0.5) / r };
   }
 
   wireControls(): void {
@@ -491,6 +506,7 @@ window.starclockViewer = {
   state: () => need(viewer).state(),
   play: () => need(viewer).setPlaying(true),
   pause: () => need(viewer).setPlaying(false),
+  locate: (index: number) => need(viewer).locate(index),
   benchmark: (options?: BenchmarkOptions) => {
     const v = need(viewer);
     return runBenchmark(

@@ -72,7 +72,7 @@ export function drawStars(
   const r = scale >= 2 ? 2 : 1; // half size of a star's square
   const R = r + 2; // half size of the remnant outlines
   const { phase, status, luminosity, teff } = cols;
-  const { rgba, bv, mvAtUnitL } = lut;
+  const { rgba } = lut;
   const dx = drawn.x;
   const dy = drawn.y;
   const dm = drawn.mark;
@@ -92,8 +92,8 @@ export function drawStars(
       vx = logT;
       vy = logL;
     } else {
-      vx = bv[k];
-      vy = mvAtUnitL[k] - 2.5 * logL;
+      vx = lut.bvAt(logT);
+      vy = lut.mvAt(logT, logL);
     }
     let px = Math.floor((vx - x0) * fx);
     let py = Math.floor((vy - y0) * fy);
