@@ -1,5 +1,7 @@
 import { Command, CommanderError } from 'commander';
 import { demoCommand } from './commands/demo.js';
+import { historyCommand } from './commands/history.js';
+import { populationCommand } from './commands/population.js';
 import { lifeCommand } from './commands/life.js';
 import { starCommand } from './commands/star.js';
 import { batchCommand } from './commands/batch.js';
@@ -32,6 +34,8 @@ export function createProgram(io: Io): Command {
     .addCommand(batchCommand(io))
     .addCommand(plotCommand(io))
     .addCommand(viewCommand(io))
+    .addCommand(populationCommand(io))
+    .addCommand(historyCommand(io))
     .addCommand(demoCommand(io));
   // addCommand does not pass settings down, so every command gets the same output and exit handling.
   const configure = (command: Command): void => {
