@@ -148,6 +148,12 @@ export function gridOfSlabs(slabs: GridSlab[], source: string): Grid {
     mmin = Math.min(mmin, 10 ** s.logM[0]);
     mmax = Math.max(mmax, 10 ** s.logM[s.logM.length - 1]);
   }
+  // 10 ** log10(m) can miss m by an ulp (150 → 150.00000000000003); the range is reported and
+  // compared, so round it to 12 digits, inward, which keeps every query inside the tracks
+  mmin = Number(mmin.toPrecision(12));
+  mmax = Number(mmax.toPrecision(12));
+  if (slabs.some((s) => Math.log10(mmin) < s.logM[0])) mmin = Number((mmin * (1 + 1e-12)).toPrecision(12));
+  if (slabs.some((s) => Math.log10(mmax) > s.logM[s.logM.length - 1])) mmax = Number((mmax * (1 - 1e-12)).toPrecision(12));
   return {
     slabs,
     logZ: Float64Array.from(slabs.map((s) => s.logZ)),
