@@ -20,11 +20,12 @@ export interface Ring {
 }
 
 /**
- * The diagram: uPlot draws the axes, ticks and grid on its canvas and the overlays (isochrone,
- * track, rings) in its `draw` hook; the stars are drawn into an ImageData buffer on a canvas of
- * exactly the plotting area's size in device pixels, placed in uPlot's `.u-under` element —
- * beneath uPlot's own canvas, so its grid and overlays lie on top — and put with one
- * putImageData per frame. uPlot is redrawn only when an overlay changes.
+ * The diagram: uPlot draws the axes, ticks and grid on its canvas, once (again only on a resize);
+ * the stars are drawn into an ImageData buffer on a canvas of exactly the plotting area's size
+ * in device pixels, placed in uPlot's `.u-under` element — beneath uPlot's canvas, so the grid
+ * lies on top — and put with one putImageData per frame; the overlays (isochrone, track, rings)
+ * go on a third canvas of the same size at the bottom of uPlot's `.u-over` element, placed with
+ * uPlot's valToPos, so a frame never redraws the axes.
  */
 export interface DiagramChart {
   plot: uPlot;
@@ -70,49 +71,6 @@ export function createDiagramChart(
     hooks: {
       // the plotting box settles after the axes are measured (and on setSize): redraw the stars then
       setSize: [() => queueMicrotask(onResize)],
-      draw: [
-        (u) => {
-          const ctx = u.ctx;
-          const { left, top, width: w, height: h } = u.bbox;
-          ctx.save();
-          ctx.beginPath();
-          ctx.rect(left, top, w, h);
-          ctx.clip();
-          for (const line of lines) {
-            ctx.strokeStyle = line.stroke;
-            ctx.lineWidth = line.width * devicePixelRatio;
-            ctx.setLineDash(line.dash.map((d) => d * devicePixelRatio));
-            ctx.beginPath();
-            let pen = false;
-            for (let i = 0; i < line.x.length; i++) {
-              const vx = line.x[i];
-              const vy = line.y[i];
-              if (!(Number.isFinite(vx) && Number.isFinite(vy))) {
-                pen = false;
-                continue;
-              }
-              const px = u.valToPos(vx, 'x', true);
-              const py = u.valToPos(vy, 'y', true);
-              if (pen) ctx.lineTo(px, py);
-              else ctx.moveTo(px, py);
-              pen = true;
-            }
-            ctx.stroke();
-          }
-          ctx.setLineDash([]);
-          for (const ring of rings) {
-            if (!(Number.isFinite(ring.x) && Number.isFinite(ring.y))) continue;
-            const px = Math.min(left + w - 4, Math.max(left + 4, u.valToPos(ring.x, 'x', true)));
-            const py = Math.min(top + h - 4, Math.max(top + 4, u.valToPos(ring.y, 'y', true)));
-            ctx.strokeStyle = ring.stroke;
-            ctx.lineWidth = 1.5 * devicePixelRatio;
-            ctx.beginPath();
-            ctx.arc(px, py, 7 * devicePixelRatio, 0, 2 * Math.PI);
-            ctx.stroke();
-          }
-          ctx.restore();
-        },
-      ],
     },
   };
   const plot = new uPlot(opts, [[view.xMin, view.xMax], [null, null]], el);
@@ -120,6 +78,55 @@ export function createDiagramChart(
   canvas.className = 'star-layer';
   plot.under.appendChild(canvas);
   const ctx = canvas.getContext('2d', { alpha: true }) as CanvasRenderingContext2D;
+  // overlays on their own canvas above uPlot's, so a new frame never redraws the axes
+  const overCanvas = document.createElement('canvas');
+  overCanvas.className = 'overlay-layer';
+  plot.over.prepend(overCanvas);
+  const octx = overCanvas.getContext('2d') as CanvasRenderingContext2D;
+  const drawOverlays = () => {
+    const w = canvas.width;
+    const h = canvas.height;
+    if (overCanvas.width !== w || overCanvas.height !== h) {
+      overCanvas.width = w;
+      overCanvas.height = h;
+      overCanvas.style.width = canvas.style.width;
+      overCanvas.style.height = canvas.style.height;
+    }
+    const r = devicePixelRatio;
+    const X = (v: number) => plot.valToPos(v, 'x') * r;
+    const Y = (v: number) => plot.valToPos(v, 'y') * r;
+    octx.clearRect(0, 0, w, h);
+    for (const line of lines) {
+      octx.strokeStyle = line.stroke;
+      octx.lineWidth = line.width * r;
+      octx.setLineDash(line.dash.map((d) => d * r));
+      octx.beginPath();
+      let pen = false;
+      for (let i = 0; i < line.x.length; i++) {
+        const vx = line.x[i];
+        const vy = line.y[i];
+        if (!(Number.isFinite(vx) && Number.isFinite(vy))) {
+          pen = false;
+          continue;
+        }
+        if (pen) octx.lineTo(X(vx), Y(vy));
+        else octx.moveTo(X(vx), Y(vy));
+        pen = true;
+      }
+      octx.stroke();
+    }
+    octx.setLineDash([]);
+    for (const ring of rings) {
+      if (!(Number.isFinite(ring.x) && Number.isFinite(ring.y))) continue;
+      const px = Math.min(w - 4 * r, Math.max(4 * r, X(ring.x)));
+      const py = Math.min(h - 4 * r, Math.max(4 * r, Y(ring.y)));
+      octx.strokeStyle = ring.stroke;
+      octx.lineWidth = 1.5 * r;
+      octx.beginPath();
+      octx.arc(px, py, 7 * r, 0, 2 * Math.PI);
+      octx.stroke();
+    }
+  };
   let image: ImageData = ctx.createImageData(1, 1);
   let pixels: Uint32Array;
   // uPlot settles its plotting box (bbox, device pixels) only once the axes are measured, and
@@ -168,7 +175,8 @@ export function createDiagramChart(
     setOverlays(l: Overlay[], r: Ring[]) {
       lines = l;
       rings = r;
-      plot.redraw(false, false);
+      size();
+      drawOverlays();
     },
     nearest(cssX: number, cssY: number, radius: number): number {
       const s = devicePixelRatio;

@@ -79,34 +79,26 @@ export function createHistoryChart(el: HTMLElement, history: History, timeGrid: 
     series,
     legend: { show: true, live: true },
     cursor: { drag: { x: false, y: false }, points: { show: false } },
-    hooks: {
-      draw: [
-        (u) => {
-          const x = u.valToPos(current, 'x', true);
-          const { top, height } = u.bbox;
-          const ctx = u.ctx;
-          ctx.save();
-          ctx.strokeStyle = '#ffcf6e';
-          ctx.lineWidth = 2 * devicePixelRatio;
-          ctx.beginPath();
-          ctx.moveTo(x, top);
-          ctx.lineTo(x, top + height);
-          ctx.stroke();
-          ctx.restore();
-        },
-      ],
-    },
   };
   const data = [Array.from(history.times), ...history.counts] as uPlot.AlignedData;
   const plot = new uPlot(opts, data, el);
+  // the current time: a line element moved over the chart (no redraw of the chart per frame)
+  const cursor = document.createElement('div');
+  cursor.className = 'time-cursor';
+  plot.over.appendChild(cursor);
+  const place = () => {
+    cursor.style.transform = `translateX(${plot.valToPos(current, 'x')}px)`;
+  };
+  plot.hooks.setSize = [...(plot.hooks.setSize ?? []), () => queueMicrotask(place)];
   return {
     plot,
     setCurrent(t: number) {
       current = t;
-      plot.redraw(false, false);
+      place();
     },
     refresh() {
       plot.setData([Array.from(history.times), ...history.counts] as uPlot.AlignedData);
+      place();
     },
   };
 }

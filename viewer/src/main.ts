@@ -285,22 +285,38 @@ class Viewer {
     this.showInfo();
   }
 
+  private infoTerms = '';
+  private infoCells: HTMLElement[] = [];
+
   /** Fills the star panel (textContent only: names come from user files). */
   showInfo(): void {
     const s = this.hovered >= 0 ? this.hovered : this.pinned >= 0 ? this.pinned : this.chosen;
-    const dl = $('star-info').querySelector('dl') as HTMLDListElement;
-    dl.textContent = '';
     ($('star-info').querySelector('.hint') as HTMLElement).hidden = s >= 0;
-    if (s < 0) return;
+    const rows = s >= 0 ? this.infoRows(s) : [];
+    const terms = rows.map((r) => r[0]).join('\n');
+    if (terms !== this.infoTerms) {
+      // a new set of rows: rebuild the list; else only the values change (no new elements per frame)
+      const dl = $('star-info').querySelector('dl') as HTMLDListElement;
+      dl.textContent = '';
+      this.infoCells = rows.map(([term]) => {
+        const dt = document.createElement('dt');
+        dt.textContent = term;
+        const dd = document.createElement('dd');
+        dl.append(dt, dd);
+        return dd;
+      });
+      this.infoTerms = terms;
+    }
+    rows.forEach(([, value], i) => {
+      if (this.infoCells[i].textContent !== value) this.infoCells[i].textContent = value;
+    });
+  }
+
+  private infoRows(s: number): [string, string][] {
+    const rows: [string, string][] = [];
+    const add = (term: string, value: string) => rows.push([term, value]);
     const i = this.pop.inputIndex[s];
     const names = this.payload.stars.name;
-    const add = (term: string, value: string) => {
-      const dt = document.createElement('dt');
-      dt.textContent = term;
-      const dd = document.createElement('dd');
-      dd.textContent = value;
-      dl.append(dt, dd);
-    };
     add('name', names ? names[i] : `star ${i + 1}`);
     if (names) add('row', String(i + 1));
     const m = this.pop.initialMass[s];
@@ -310,20 +326,21 @@ class Viewer {
       const a = formatStateValue('age', -age);
       add('state', `not born yet (in ${a.text} ${a.unit})`);
       add('initialMass', `${formatSignificant(m, 4, true)} Msun`);
-      return;
+      return rows;
     }
     let st: StarState;
     try {
       st = this.pop.query.star(m, age, z);
     } catch (error) {
       add('state', (error as Error).message);
-      return;
+      return rows;
     }
     const keys: (keyof StarState)[] = ['phase', 'spectralType', 'initialMass', 'mass', 'age', 'z', 'luminosity', 'teff', 'radius', 'mv', 'bv', 'remnant'];
     for (const key of keys) {
       const f = formatStateValue(key, st[key] as never);
       add(key, f.unit && f.text !== '—' ? `${f.text} ${f.unit}` : f.text);
     }
+    return rows;
   }
 
   setPlaying(on: boolean): void {
