@@ -52,9 +52,10 @@ export async function viewerPayloadFromText(text: string, fileName: string, opti
   const { encodeViewerGrid } = await import('../../lib/io/viewerPayloadGrid.js');
   const grid = options.grid ?? (await import('../../lib/io/loadBuiltinGrid.js')).loadBuiltinGrid();
   const { massRange, zRange, source } = grid;
+  const end = (x: number) => String(Number(x.toPrecision(6)));
   const inGrid = (m: number, z: number, where: string) => {
-    if (!(m >= massRange.min && m <= massRange.max)) throw new RangeError(`${where}: initialMass ${m} outside the ${source} grid's ${massRange.min}–${massRange.max} Msun`);
-    if (!(z >= zRange.min && z <= zRange.max)) throw new RangeError(`${where}: z ${z} outside the ${source} grid's ${zRange.min}–${zRange.max}`);
+    if (!(m >= massRange.min && m <= massRange.max)) throw new RangeError(`${where}: initialMass ${m} outside the ${source} grid's ${end(massRange.min)}–${end(massRange.max)} Msun`);
+    if (!(z >= zRange.min && z <= zRange.max)) throw new RangeError(`${where}: z ${z} outside the ${source} grid's ${end(zRange.min)}–${end(zRange.max)}`);
   };
   const zSpan = (zs: ArrayLike<number>) => {
     let lo = Infinity;

@@ -142,8 +142,8 @@ export function readStarTable(text: string, options: { ageUnit?: string } = {}):
     else {
       try {
         years = parseAge(a);
-      } catch (error) {
-        throw new RangeError(`table line ${row.line}: ${ageKey} ${(error as Error).message}`);
+      } catch {
+        throw new RangeError(`table line ${row.line}: ${ageKey} '${a}' is not an age; expected a number (in ${unit}) or a number with a unit yr, kyr, Myr or Gyr (e.g. 4.6Gyr)`);
       }
     }
     if (!(years >= 0) || !Number.isFinite(years)) throw new RangeError(`table line ${row.line}: ${ageKey} '${a}' must be a finite age ≥ 0`);
