@@ -40,8 +40,9 @@ export function isochrone(
   if (!(Number.isInteger(count) && count >= 2)) throw new RangeError(`count ${count} must be an integer ≥ 2`);
   const l0 = Math.log10(minMass);
   const l1 = Math.log10(maxMass);
+  const clamp = (m: number) => Math.min(maxMass, Math.max(minMass, m));
   const onOrBeforeMs = (m: number) => {
-    const p = query.star(m, age, z).phase;
+    const p = query.star(clamp(m), age, z).phase;
     return p === 'main-sequence' || p === 'pre-main-sequence' || p === 'brown-dwarf';
   };
   // turnoff: highest mass on the main sequence; search down from the top for the first MS mass
@@ -68,11 +69,12 @@ export function isochrone(
         if (onOrBeforeMs(10 ** mid)) lo = mid;
         else hi = mid;
       }
-      turnoffMass = 10 ** lo;
+      turnoffMass = clamp(10 ** lo);
     }
   }
   const masses: number[] = [];
-  for (let i = 0; i < count; i++) masses.push(10 ** (l0 + ((l1 - l0) * i) / (count - 1)));
+  // log-spaced, with the ends exactly at the limits (10 ** log10(m) can miss m by an ulp)
+  for (let i = 0; i < count; i++) masses.push(i === 0 ? minMass : i === count - 1 ? maxMass : 10 ** (l0 + ((l1 - l0) * i) / (count - 1)));
   // refine around the turnoff, where the isochrone turns fastest
   const lt = Math.log10(turnoffMass);
   for (let i = -20; i <= 20; i++) {

@@ -11,8 +11,8 @@ export const BUILTIN_Z = [0.0001, 0.0002, 0.0005, 0.001, 0.002, 0.004, 0.007, 0.
  * Initial masses of the built-in grid, Msun: 10 log-spaced brown dwarfs from 0.01 Msun,
  * then 40 per dex from 0.0755 Msun to 150 Msun. Every layout boundary (hydrogen-burning
  * limit, helium-white-dwarf / helium-flash / quiet-ignition / neutron-star / black-hole
- * transitions) gets two extra tracks found by bisection, 10⁻⁴ dex either side, so that the
- * interpolator never has to reach across one.
+ * transitions) gets two extra tracks found by bisection, within 10⁻⁹ dex either side, so that
+ * the interpolator never has to reach across one and round masses fall on the right side.
  */
 export function builtinGridMasses(): number[] {
   const out: number[] = [];
@@ -39,7 +39,7 @@ export function builtinRawTracks(z: number): Track[] {
     if (layouts[i] === layouts[i - 1]) continue;
     let a = Math.log10(base[i - 1].initialMass);
     let b = Math.log10(base[i].initialMass);
-    while (b - a > 2e-4) {
+    while (b - a > 1e-9) {
       const mid = 0.5 * (a + b);
       if (layoutOf(gen(10 ** mid)) === layouts[i - 1]) a = mid;
       else b = mid;
