@@ -37,7 +37,7 @@ test('batch IN -o OUT passes every input column through, appends the state, exit
   // BOM, CRLF and the quoting of the input are kept; the input's mass column makes the computed one sc_mass
   expect(text.startsWith('\uFEFFname,mass,age_Gyr,phase,sc_mass,coreMass,luminosity,teff,radius,logg,spectralType,bv,mbol,mv,color,msLifetime,remnant,remnantMass\r\n')).toBe(true);
   const rows = text.split('\r\n');
-  expect(rows[1]).toMatch(/^Vesk A,1,4.57,main-sequence,(?:0\.99|1\.00)\d*,0,[\d.]+,57\d\d[\d.]*,[\d.]+,4.4\d+,G\dV,/);
+  expect(rows[1]).toMatch(/^Vesk A,1,4.57,main-sequence,(?:0\.99\d*|1(?:\.00\d*)?),0,[\d.]+,57\d\d[\d.]*,[\d.]+,4.4\d+,G\dV,/);
   expect(rows[2].startsWith('"Orun, the ""old""",0.8,12,main-sequence,')).toBe(true);
   expect(rows[3]).toBe('"Tal');
   expect(rows[4]).toMatch(/^B",40,0.5,black-hole,[\d.]+,[\d.]+,0,0,[\d.e-]+,[\d.]+,,,,,,[\d.]+,black-hole,[\d.]+$/);
