@@ -12,6 +12,13 @@ const scenario = JSON.parse(readFileSync(DEMO_STARS, 'utf8')) as {
   stars: { name: string; initialMass: number; z: number; age: number }[];
 };
 
+// the bundled scenarios' file names (their "name" slugified) and every file the demo writes
+const SCENARIOS = ['greywake-cluster', 'meridian-field', 'tessel-cluster', 'velkin-nursery'];
+const EXPECTED_FILES = [
+  'lives.json', 'orvel-catalogue-rejects.csv', 'orvel-catalogue-states.csv', 'present-states.csv',
+  ...SCENARIOS.flatMap((s) => [`${s}-history.json`, `${s}-population.csv`, `${s}.html`]),
+].sort();
+
 const sha = (path: string): string => createHash('sha256').update(readFileSync(path)).digest('hex');
 
 // Minimal RFC 4180 reader for the test (quoted fields, doubled quotes).
@@ -46,10 +53,35 @@ describe('starclock demo', () => {
     expect(run.stdout).toContain(scenario.region);
     for (const star of scenario.stars) expect(run.stdout).toContain(star.name);
     const said = lines(run.stderr);
-    expect(said).toHaveLength(1);
+    // one line for the named stars, one for the catalogue, one per bundled scenario
+    expect(said).toHaveLength(2 + SCENARIOS.length);
     expect(said[0]).toContain('wrote');
     expect(said[0]).toContain(join(out, 'present-states.csv'));
     expect(said[0]).toContain(join(out, 'lives.json'));
+    expect(said[1]).toContain(join(out, 'orvel-catalogue-states.csv'));
+    for (const slug of SCENARIOS) expect(run.stderr).toContain(`file://${join(out, `${slug}.html`)}`);
+  });
+
+  test('runs every bundled scenario end to end: population CSV, history JSON and a viewer page', () => {
+    for (const slug of SCENARIOS) {
+      const pop = readCsv(readFileSync(join(out, `${slug}-population.csv`), 'utf8'));
+      expect(pop[0].slice(0, 3)).toEqual(['index', 'birthTime', 'initialMass']);
+      expect(pop.length).toBeGreaterThan(1000);
+      const h = JSON.parse(readFileSync(join(out, `${slug}-history.json`), 'utf8'));
+      expect(h.times.length).toBeGreaterThan(10);
+      expect(Object.keys(h.counts)).toContain('main-sequence');
+      const html = readFileSync(join(out, `${slug}.html`), 'utf8');
+      expect(html.startsWith('<!doctype html>') || html.startsWith('<!DOCTYPE html>')).toBe(true);
+      expect(html).not.toMatch(/<script[^>]+src=["']?https?:/i); // self-contained: nothing fetched
+    }
+  });
+
+  test('puts the named catalogue through batch: every star computed', () => {
+    const rows = readCsv(readFileSync(join(out, 'orvel-catalogue-states.csv'), 'utf8'));
+    const input = readCsv(readFileSync(join(ROOT, 'tracks-demo', 'orvel-catalogue.csv'), 'utf8'));
+    expect(rows.length).toBe(input.length);
+    expect(rows[0].slice(0, input[0].length)).toEqual(input[0]);
+    expect(rows[0]).toContain('phase');
   });
 
   test('writes present-states.csv: name then every schema key, one row per star, values that read back', () => {
@@ -90,7 +122,7 @@ describe('starclock demo', () => {
   });
 
   test('leaves no temporary files and does not touch its input', () => {
-    expect(readdirSync(out).sort()).toEqual(['lives.json', 'present-states.csv']);
+    expect(readdirSync(out).sort()).toEqual(EXPECTED_FILES);
     expect(sha(DEMO_STARS)).toBe(before);
   });
 
@@ -105,7 +137,7 @@ describe('starclock demo', () => {
     const cwd = mkdtempSync(join(tmpdir(), 'starclock-demo-cwd-'));
     const { code } = runBin(['demo'], cwd);
     expect(code).toBe(0);
-    expect(readdirSync(join(cwd, 'starclock-demo')).sort()).toEqual(['lives.json', 'present-states.csv']);
+    expect(readdirSync(join(cwd, 'starclock-demo')).sort()).toEqual(EXPECTED_FILES);
   });
 
   test('-o naming a file that exists exits 2 with one line and writes nothing', () => {

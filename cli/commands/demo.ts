@@ -1,6 +1,6 @@
 import { Command } from 'commander';
-import { mkdir, readFile, stat } from 'node:fs/promises';
-import { join, resolve } from 'node:path';
+import { mkdir, readdir, readFile, stat } from 'node:fs/promises';
+import { dirname, join, resolve } from 'node:path';
 import type { Life } from '../../lib/model/life.js';
 import type { StarState } from '../../lib/model/starState.js';
 import { STATE_KEYS } from '../../lib/model/starState.js';
@@ -112,5 +112,55 @@ written to a temporary file first and renamed, so it is whole or absent.
       await writeFileAtomic(livesPath, result.livesJson, [input]);
       io.out(result.summary);
       diagnostic(io, `wrote ${statesPath} (${scenario.stars.length} present states) and ${livesPath} (their lives)`);
+      for (const line of await runDemoScenarios(dir, io)) diagnostic(io, line);
     });
+}
+
+/** The bundled scenarios (tracks-demo/scenarios/*.json) and the catalogue of named stars. */
+export function demoScenarioDir(): string {
+  return join(dirname(demoStarsPath()), 'scenarios');
+}
+export function demoCataloguePath(): string {
+  return join(dirname(demoStarsPath()), 'orvel-catalogue.csv');
+}
+
+/**
+ * The rest of the demo, end to end: the catalogue of named stars through `batch`, and every
+ * bundled scenario through `population` (present states at its "now"), `history` (the
+ * population over time) and `view` (the animated page). Each file is written whole or not at
+ * all. Returns one line per file written, saying where to open the pages.
+ */
+export async function runDemoScenarios(dir: string, io: Io): Promise<string[]> {
+  const said: string[] = [];
+  const [{ loadBuiltinGrid }, { createGridQuery }, { runBatch }, { readScenarioFile }, { populationRows }, { populationHistory }, { writeFileAtomicChunks }, { writeViewerPage, slugify }, { historyJson }] = await Promise.all([
+    import('../../lib/io/loadBuiltinGrid.js'),
+    import('../../lib/interp/gridQuery.js'),
+    import('../batchRun.js'),
+    import('../scenarioFile.js'),
+    import('../../lib/io/populationRows.js'),
+    import('../../lib/population/populationHistory.js'),
+    import('../../lib/io/writeFileAtomicChunks.js'),
+    import('./view.js'),
+    import('./history.js'),
+  ]);
+  const grid = loadBuiltinGrid();
+  const query = createGridQuery(grid);
+  const catalogue = demoCataloguePath();
+  const catalogueOut = join(dir, 'orvel-catalogue-states.csv');
+  const quiet: Io = { out: io.out, err: () => undefined };
+  const b = await runBatch({ input: catalogue, output: catalogueOut, rejects: join(dir, 'orvel-catalogue-rejects.csv'), workers: 1, progress: false, grid, gridBytes: null }, quiet);
+  said.push(`wrote ${catalogueOut} (${b.written} named stars of the catalogue through batch${b.rejected ? `, ${b.rejected} rejected` : ''})`);
+  const files = (await readdir(demoScenarioDir())).filter((f) => f.endsWith('.json')).sort();
+  for (const f of files) {
+    const path = join(demoScenarioDir(), f);
+    const scenario = await readScenarioFile(path);
+    const slug = slugify(scenario.name);
+    const popPath = join(dir, `${slug}-population.csv`);
+    await writeFileAtomicChunks(popPath, populationRows(scenario, query, { start: 0, count: scenario.size, format: 'csv', header: true }), [path]);
+    const histPath = join(dir, `${slug}-history.json`);
+    await writeFileAtomic(histPath, JSON.stringify(historyJson(populationHistory(scenario, query))) + '\n', [path]);
+    const page = await writeViewerPage(path, join(dir, `${slug}.html`), { grid });
+    said.push(`${scenario.name}: wrote ${popPath} (${scenario.size} stars at ${scenario.now / 1e6} Myr), ${histPath}, and the viewer page ${page.path} — open it in a browser (file://${page.path})`);
+  }
+  return said;
 }
