@@ -37,8 +37,8 @@ export interface BatchRunOptions {
   columns?: string[];
   workers: number;
   progress: boolean;
-  /** the grid to use and, for workers, its serialized bytes (null: the built-in grid) */
-  grid: Grid;
+  /** the grid to use (null: the built-in one, loaded where it is needed) and, for workers, its serialized bytes (null: the built-in grid) */
+  grid: Grid | null;
   gridBytes: Uint8Array | null;
 }
 
@@ -122,12 +122,13 @@ interface Computer {
   close(): Promise<void>;
 }
 
-async function inlineComputer(grid: Grid, plan: BatchPlan): Promise<Computer> {
-  const [{ createGridQuery }, { processBatchChunk }] = await Promise.all([
+async function inlineComputer(grid: Grid | null, plan: BatchPlan): Promise<Computer> {
+  const [{ createGridQuery }, { processBatchChunk }, { loadBuiltinGrid }] = await Promise.all([
     import('../lib/interp/gridQuery.js'),
     import('../lib/io/processBatchChunk.js'),
+    import('../lib/io/loadBuiltinGrid.js'),
   ]);
-  const query: GridQuery = createGridQuery(grid);
+  const query: GridQuery = createGridQuery(grid ?? loadBuiltinGrid());
   return {
     submit: async (_seq, bytes) => processBatchChunk(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), plan, query),
     close: async () => undefined,

@@ -2,6 +2,7 @@ import { Command, InvalidArgumentError, Option } from 'commander';
 import { DEFAULT_BATCH_COLUMNS, CLASH_PREFIX } from '../../lib/io/batchPlan.js';
 import { STATE_KEYS } from '../../lib/model/starState.js';
 import { SOLAR_Z } from '../../lib/model/limits.js';
+import type { Grid } from '../../lib/tracks/grid.js';
 import type { Io } from '../io.js';
 import { diagnostic } from '../io.js';
 import { parseZ, Z_TEXT } from '../options.js';
@@ -100,13 +101,14 @@ Examples:
     )
     .action(async (input: string, options: BatchOptions) => {
       const { runBatch } = await import('../batchRun.js');
-      let grid;
+      let grid: Grid | null = null;
       let gridBytes: Uint8Array | null = null;
       if (options.grid !== undefined) {
         const [{ loadGridFile }, { serializeGrid }] = await Promise.all([import('../gridSource.js'), import('../../lib/tracks/gridCache.js')]);
         grid = await loadGridFile(options.grid, io);
         if (options.workers > 1) gridBytes = serializeGrid(grid);
-      } else {
+      } else if (options.workers === 1) {
+        // with worker threads each loads its own copy; this thread needs none
         const { loadBuiltinGrid } = await import('../../lib/io/loadBuiltinGrid.js');
         grid = loadBuiltinGrid();
       }
