@@ -184,3 +184,13 @@ describe('createGridQuery(grid) — masses', () => {
     );
   });
 });
+
+describe('createGridQuery(grid).columns — black holes', () => {
+  test('columns() gives a black hole its Schwarzschild radius and the log g that goes with it, as star() does', () => {
+    const c = q.columns({ initialMass: [60], age: [1e8], z: 0.014 });
+    const s = q.star(60, 1e8, 0.014);
+    expect(s.phase).toBe('black-hole');
+    expect(c.radius[0]).toBeCloseTo(s.radius, 15);
+    expect(c.logg[0]).toBeCloseTo(s.logg, 12);
+  });
+});

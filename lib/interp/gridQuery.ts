@@ -246,9 +246,11 @@ export function createGridQuery(grid: Grid): GridQuery {
         o.coreMass[s] = R0[2];
         o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
         if (ph === BLACK_HOLE) {
+          const rs = schwarzschildRadius(mass);
           o.luminosity[s] = 0;
           o.teff[s] = 0;
-          o.radius[s] = schwarzschildRadius(mass);
+          o.radius[s] = rs;
+          o.logg[s] = LOGG_SUN + log10(mass) - 2 * log10(rs);
         } else {
           const L = exp10(R0[3]);
           const T = exp10(R0[4]);
