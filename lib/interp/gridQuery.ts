@@ -77,7 +77,19 @@ const MB: MassBlend = { run: undefined as unknown as GridRun, b0: 0, b1: 0, i: 0
 
 function evalSlab(slab: GridSlab, lm: number, m: number, la: number, r: Float64Array): void {
   locateMass(slab, lm, MB);
-  const { run, b0, b1, c00, c01, c10, c11, i, u } = MB;
+  blendRun(MB.run, MB.b0, MB.b1, MB.c00, MB.c01, MB.c10, MB.c11, MB.i, MB.u, m, la, -1, r);
+}
+
+/**
+ * The state at log age `la` of the star blended from a run's tracks with the Hermite weights
+ * c·· (see locateMass), into `r`; returns the EEP index used. `hint` is an EEP index to try
+ * first (a star's index at its previous age, −1 for none): when the age moved little, the
+ * search is a comparison or two instead of a bisection.
+ */
+export function blendRun(
+  run: GridRun, b0: number, b1: number, c00: number, c01: number, c10: number, c11: number,
+  i: number, u: number, m: number, la: number, hint: number, r: Float64Array,
+): number {
   const n = run.n;
   const A = run.ages;
   // last j with age(j) <= la; A holds (log age, slope) pairs
@@ -88,6 +100,13 @@ function evalSlab(slab: GridSlab, lm: number, m: number, la: number, r: Float64A
   if (!(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
     j = 0;
     phi = 0;
+  } else if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, c00, c01, c10, c11, n, la, hint)) >= 0) {
+    const x0 = a0i + 2 * j;
+    const x1 = a1i + 2 * j;
+    const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
+    const ak = j < n - 1 ? c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3] : aj;
+    phi = ak > aj ? (la - aj) / (ak - aj) : 0;
+    if (phi > 1) phi = 1;
   } else {
     // narrow the search with the run's age index (see indexRunAges), then bisect
     let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
@@ -145,6 +164,29 @@ function evalSlab(slab: GridSlab, lm: number, m: number, la: number, r: Float64A
   r[6] = run.remnantMass[t0] * (1 - tf) + run.remnantMass[t1] * tf;
   r[7] = run.remnant;
   if (r[2] > r[1]) r[2] = r[1];
+  return j;
+}
+
+/**
+ * From EEP `hint`, steps up or down (at most 6 steps) to the last EEP whose interpolated log
+ * age is ≤ la; −1 when it is further away (the caller then searches).
+ */
+function walkFrom(A: Float64Array, a0i: number, a1i: number, c00: number, c01: number, c10: number, c11: number, n: number, la: number, hint: number): number {
+  let j = hint;
+  const age = (k: number) => c00 * A[a0i + 2 * k] + c10 * A[a0i + 2 * k + 1] + c01 * A[a1i + 2 * k] + c11 * A[a1i + 2 * k + 1];
+  if (age(j) <= la) {
+    for (let s = 0; s < 6; s++) {
+      if (j >= n - 1 || age(j + 1) > la) return j;
+      j++;
+    }
+    return -1;
+  }
+  for (let s = 0; s < 6; s++) {
+    if (j <= 0) return -1;
+    j--;
+    if (age(j) <= la) return j;
+  }
+  return -1;
 }
 
 /**
@@ -176,6 +218,40 @@ function evalGrid(grid: Grid, lm: number, m: number, la: number, lz: number): vo
   const v = 1 - w;
   for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
   if (R0[2] > R0[1]) R0[2] = R0[1];
+}
+
+
+/**
+ * Writes one star's numeric state from an evaluation result `r` (phase, mass, core mass,
+ * log L, log Teff, log msLifetime, remnant mass, remnant code) into row `s` of `o`: L and
+ * Teff from their logs, radius by Stefan–Boltzmann, log g from mass and radius, a black hole
+ * with L = Teff = 0 and its Schwarzschild radius.
+ */
+export function writeStateRow(o: StateColumns, s: number, r: Float64Array): void {
+  const ph = r[0];
+  const mass = r[1];
+  const logR = 0.5 * r[3] - 2 * (r[4] - LOG_TEFF_SUN);
+  o.phase[s] = ph;
+  o.mass[s] = mass;
+  o.coreMass[s] = r[2];
+  o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
+  if (ph === BLACK_HOLE) {
+    const rs = schwarzschildRadius(mass);
+    o.luminosity[s] = 0;
+    o.teff[s] = 0;
+    o.radius[s] = rs;
+    o.logg[s] = LOGG_SUN + log10(mass) - 2 * log10(rs);
+  } else {
+    const L = exp10(r[3]);
+    const T = exp10(r[4]);
+    const f = TEFF_SUN / T;
+    o.luminosity[s] = L;
+    o.teff[s] = T;
+    o.radius[s] = Math.sqrt(L) * f * f; // Stefan–Boltzmann, as logR
+  }
+  o.msLifetime[s] = r[5] === 0 ? 0 : exp10(r[5]);
+  o.remnantMass[s] = r[6];
+  o.remnant[s] = r[7];
 }
 
 /**
@@ -238,30 +314,7 @@ export function createGridQuery(grid: Grid): GridQuery {
           continue;
         }
         evalGrid(grid, log10(m), m, log10(age), zScalar ? lzScalar : log10(z));
-        const ph = R0[0];
-        const mass = R0[1];
-        const logR = 0.5 * R0[3] - 2 * (R0[4] - LOG_TEFF_SUN);
-        o.phase[s] = ph;
-        o.mass[s] = mass;
-        o.coreMass[s] = R0[2];
-        o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
-        if (ph === BLACK_HOLE) {
-          const rs = schwarzschildRadius(mass);
-          o.luminosity[s] = 0;
-          o.teff[s] = 0;
-          o.radius[s] = rs;
-          o.logg[s] = LOGG_SUN + log10(mass) - 2 * log10(rs);
-        } else {
-          const L = exp10(R0[3]);
-          const T = exp10(R0[4]);
-          const f = TEFF_SUN / T;
-          o.luminosity[s] = L;
-          o.teff[s] = T;
-          o.radius[s] = Math.sqrt(L) * f * f; // Stefan–Boltzmann, as logR
-        }
-        o.msLifetime[s] = R0[5] === 0 ? 0 : exp10(R0[5]);
-        o.remnantMass[s] = R0[6];
-        o.remnant[s] = R0[7];
+        writeStateRow(o, s, R0);
       }
       return o;
     },

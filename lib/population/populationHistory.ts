@@ -1,3 +1,4 @@
+import { createPopulationEvaluator } from '../interp/populationEvaluator.js';
 import type { GridQuery } from '../interp/gridQuery.js';
 import { allocateStateColumns } from '../interp/gridQuery.js';
 import { isochrone } from '../interp/isochrone.js';
@@ -155,6 +156,8 @@ export function populationHistory(
   const mass = Float64Array.from(order, (i) => sample.initialMass[i]);
   const zs = Float64Array.from(order, (i) => sample.z[i]);
   const ages = new Float64Array(n);
+  // the same stars at every time: their mass blends are found once, their EEPs followed
+  const evaluator = createPopulationEvaluator(query.grid, mass, zs);
   const out = allocateStateColumns(n);
   const prev = new Uint8Array(n).fill(UNBORN);
   const sortedZ = Float64Array.from(sample.z).sort();
@@ -179,8 +182,8 @@ export function populationHistory(
   for (let k = 0; k < steps; k++) {
     const t = times[k];
     while (born < n && birth[born] <= t) born++;
-    for (let i = 0; i < born; i++) ages[i] = t - birth[i];
-    query.columns({ initialMass: mass.subarray(0, born), age: ages.subarray(0, born), z: zs.subarray(0, born) }, out);
+    for (let i = 0; i < n; i++) ages[i] = t - birth[i]; // negative for stars not yet born (status 3, not read)
+    evaluator.evaluate(ages, out);
     sums.reset();
     let newRemnants = 0;
     let newCollapses = 0;

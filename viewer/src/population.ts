@@ -1,4 +1,5 @@
 import { allocateStateColumns, createGridQuery, type GridQuery, type StateColumns } from '../../lib/interp/gridQuery.js';
+import { createPopulationEvaluator } from '../../lib/interp/populationEvaluator.js';
 import { PHASES } from '../../lib/model/phases.js';
 import type { Grid } from '../../lib/tracks/grid.js';
 
@@ -57,14 +58,15 @@ export function createPopulation(grid: Grid, stars: { initialMass: ArrayLike<num
   }
   const z = sameZ ? zs[0] : zs;
   const query = createGridQuery(grid);
+  // the stars keep their mass and z while time runs: blends found once, EEPs followed frame to frame
+  const evaluator = createPopulationEvaluator(grid, initialMass, z);
   const columns = allocateStateColumns(n);
   const age = new Float64Array(n);
-  const input = { initialMass, age, z };
   return {
     n, query, initialMass, birthTime, z, inputIndex: order, columns, age, firstBirth,
     evaluate(t: number, counts: Int32Array, out: StateColumns = columns): void {
       for (let k = 0; k < n; k++) age[k] = t - birthTime[k];
-      query.columns(input, out);
+      evaluator.evaluate(age, out);
       counts.fill(0);
       const phase = out.phase;
       const status = out.status;
