@@ -51,6 +51,8 @@ export type { InterpolatedTrack } from './interp/interpolatedTrack.js';
 export { isochrone } from './interp/isochrone.js';
 export type { Isochrone } from './interp/isochrone.js';
 export { accuracySample } from './interp/accuracySample.js';
+export { createPopulationEvaluator } from './interp/populationEvaluator.js';
+export type { PopulationEvaluator } from './interp/populationEvaluator.js';
 export { observeState } from './model/observeState.js';
 // populations
 export { parseScenario } from './population/parseScenario.js';
