@@ -34,7 +34,8 @@ export interface GridRun {
   rec: Float64Array;
   /**
    * Age index, [track·AGE_BINS + b] = the last EEP whose log age is ≤ AGE_BIN_MIN + b·AGE_BIN_STEP
-   * (0 when none): narrows the age search to a few EEPs (see indexRunAges).
+   * (0 when none): narrows the age search to a few EEPs (see indexRunAges). Empty until the
+   * run is first used when the grid was loaded from its cache (the interpolator builds it).
    */
   ageIndex: Int16Array;
   /** per track: log10 msLifetime/yr (0 where the track has no main sequence) */

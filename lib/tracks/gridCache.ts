@@ -1,4 +1,4 @@
-import { gridOfSlabs, indexRunAges, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
+import { gridOfSlabs, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
 
 const MAGIC = 'starclock-grid-cache 1';
 const RUN_F64 = ['logM', 'ages', 'rec', 'logMsLifetime', 'remnantMass'] as const;
@@ -91,7 +91,7 @@ export function deserializeGrid(bytes: Uint8Array): Grid {
         phase: new Uint8Array(bytes.buffer, off, hr.n),
       };
       off += Math.ceil(hr.n / 8) * 8;
-      run.ageIndex = indexRunAges(run.ages, run.n, run.count);
+      // the age index is built on a run's first use (GridRun.ageIndex), so loading stays a read
       for (let k = 0; k < hr.count; k++, t++) {
         runOf[t] = ri;
         indexInRun[t] = k;
