@@ -123,3 +123,26 @@ describe('starclock history SCENARIO', () => {
     expect(csv[0].split(',')[0]).toBe('time');
   });
 });
+
+describe('starclock population --format parquet', () => {
+  test('writes a Parquet file whose rows read back (hyparquet) equal the NDJSON rows', async () => {
+    const file = scenario();
+    const out = join(dir, 'pop.parquet');
+    const run = runBin(['population', file, '--format', 'parquet', '-o', out]);
+    expect(run.code).toBe(0);
+    const { parquetReadObjects } = await import('hyparquet');
+    const buf = readFileSync(out);
+    const rows = await parquetReadObjects({ file: buf.buffer.slice(buf.byteOffset, buf.byteOffset + buf.byteLength) });
+    const nd = lines(runBin(['population', file, '--format', 'ndjson']).stdout).map((l) => JSON.parse(l));
+    expect(rows.length).toBe(nd.length);
+    for (let i = 0; i < nd.length; i += 37) {
+      for (const key of POPULATION_COLUMNS) expect(rows[i][key], `${i} ${key}`).toEqual(nd[i][key]);
+    }
+  });
+
+  test('--format parquet without -o exits 2 and says why', () => {
+    const { code, stderr } = runBin(['population', scenario(), '--format', 'parquet']);
+    expect(code).toBe(2);
+    expect(stderr).toMatch(/give -o FILE/);
+  });
+});

@@ -17,7 +17,7 @@ export function parseShard(text: string): { i: number; n: number } {
 }
 
 interface PopulationOptions {
-  format: 'csv' | 'ndjson' | 'json';
+  format: 'csv' | 'ndjson' | 'json' | 'parquet';
   output?: string;
   shard?: { i: number; n: number };
   grid?: string;
@@ -28,7 +28,7 @@ export function populationCommand(io: Io): Command {
   return new Command('population')
     .description('sample a population from a scenario and give every star its present-day state')
     .argument('<scenario>', 'scenario file (JSON; "-" for standard input)')
-    .addOption(new Option('--format <kind>', 'output format').choices(['csv', 'ndjson', 'json']).default('csv'))
+    .addOption(new Option('--format <kind>', 'output format (parquet: Apache Parquet, needs -o)').choices(['csv', 'ndjson', 'json', 'parquet']).default('csv'))
     .option('-o, --output <file>', 'write to FILE (whole or not at all) instead of standard output')
     .addOption(new Option('--shard <i/n>', 'write only shard i of n (0-based): contiguous star indices; csv/ndjson shards concatenate to one run').argParser(parseShard))
     .addOption(gridOption())
@@ -40,7 +40,9 @@ state at the scenario's "now" (every key of the schema). Each star is sampled fr
 its own seeded stream, so the output is a pure function of the scenario; with
 --shard the CSV header is written by shard 0 only, and the shards of a CSV or NDJSON
 run concatenate to exactly the bytes of one run. JSON wraps the stars in
-{ "name", "seed", "size", "now", "stars": [...] }.
+{ "name", "seed", "size", "now", "stars": [...] }. Parquet (-o FILE required) holds
+the same columns for data tools; it is built in memory, so shard runs of many
+millions of stars into one file per shard.
 
 Examples:
   starclock population tracks-demo/scenarios/tessel-cluster.json -o tessel.csv
@@ -55,6 +57,16 @@ Examples:
       const { populationRows } = await import('../../lib/io/populationRows.js');
       const shard = options.shard ?? { i: 0, n: 1 };
       const { start, count } = shardRange(scenario.size, shard.i, shard.n);
+      if (options.format === 'parquet') {
+        if (options.output === undefined) throw new RangeError('--format parquet writes a binary file: give -o FILE');
+        const { populationParquet } = await import('../../lib/io/populationParquet.js');
+        const { writeFileAtomic } = await import('../../lib/io/writeFileAtomic.js');
+        const t0 = performance.now();
+        const bytes = populationParquet(scenario, query, { start, count });
+        await writeFileAtomic(options.output, bytes, file === '-' ? [] : [file]);
+        diagnostic(io, `${scenario.name}: ${count} stars${shard.n > 1 ? ` (shard ${shard.i}/${shard.n})` : ''} in ${((performance.now() - t0) / 1000).toFixed(2)} s → ${options.output} (Parquet, ${(bytes.length / 1e6).toFixed(1)} MB)`);
+        return;
+      }
       const format = options.format === 'json' ? 'ndjson' : options.format;
       const rows = populationRows(scenario, query, { start, count, format, header: shard.i === 0 });
       const chunks = options.format === 'json' ? jsonChunks(scenario, rows) : rows;
