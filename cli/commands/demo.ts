@@ -90,10 +90,13 @@ export function demoCommand(io: Io): Command {
     .addHelpText(
       'after',
       `
-Reads tracks-demo/demo-stars.json, prints a summary of each star's present state and
-fate, and writes ${DEMO_FILES.states} (present states, one row per star) and
-${DEMO_FILES.lives} (each star's whole life) into the output directory. Each file is
-written to a temporary file first and renamed, so it is whole or absent.
+Runs the bundled demo of an invented region end to end and says what it wrote:
+tracks-demo/demo-stars.json (six named stars: a summary of each one's present state and
+fate, ${DEMO_FILES.states} and ${DEMO_FILES.lives}); the catalogue
+tracks-demo/orvel-catalogue.csv through batch (orvel-catalogue-states.csv); and every
+scenario of tracks-demo/scenarios through population (<name>-population.csv), history
+(<name>-history.json) and view (<name>.html, the animated page to open in a browser).
+Each file is written to a temporary file first and renamed, so it is whole or absent.
 `,
     )
     .action(async (options: { outDir: string }) => {

@@ -155,7 +155,9 @@ export function blendRun(
       e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
       g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
   }
-  r[1] *= m; // the grid holds masses as fractions of the initial mass
+  // the grid holds masses as fractions of the initial mass; a star that has lost nothing
+  // keeps its birth mass exactly (not m × 0.9999999999999999)
+  r[1] = r[1] >= 1 - 1e-12 ? m : r[1] * m;
   r[2] *= m;
   const ti = i + u;
   const t0 = Math.floor(ti);

@@ -22,7 +22,8 @@ const INV_LN10 = 1 / Math.LN10;
  * mass blend of every star — which tracks, which Hermite weights (locateMass), which two
  * metallicity slabs and their log-Z weight — is found once, and each star remembers the EEP
  * it was last found at, so that a small step in age costs a comparison or two instead of a
- * search. Each evaluation gives exactly what GridQuery.columns gives for the same stars.
+ * search. Each evaluation gives what GridQuery.columns gives for the same stars, to about
+ * 1e-9 relative (where a remembered EEP and a fresh search meet a bracket from either side).
  *
  * @param grid the grid (built-in or a user's)
  * @param initialMass Msun per star, inside the grid's mass range
