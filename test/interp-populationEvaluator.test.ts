@@ -58,3 +58,16 @@ describe('createPopulationEvaluator(grid, initialMass, z).evaluate(age, out)', (
     expect(() => createPopulationEvaluator(grid, [1], 0.014).evaluate([1, 2])).toThrow(/2 ages for 1 stars/);
   });
 });
+
+describe('createPopulationEvaluator(…, { hrOnly: true })', () => {
+  test('hrOnly writes the same phase, mass, luminosity and teff as the full evaluation', () => {
+    const m = [0.05, 0.3, 1, 2.5, 9, 30, 60];
+    const age = [1e9, 5e9, 4.6e9, 5e8, 3e7, 6.5e6, 1e8];
+    const full = createPopulationEvaluator(grid, m, 0.014).evaluate(age);
+    const hr = createPopulationEvaluator(grid, m, 0.014, { hrOnly: true }).evaluate(age);
+    expect(Array.from(hr.phase)).toEqual(Array.from(full.phase));
+    for (const k of ['mass', 'luminosity', 'teff'] as const) {
+      for (let i = 0; i < m.length; i++) expect(hr[k][i]).toBeCloseTo(full[k][i], 10);
+    }
+  });
+});

@@ -3,6 +3,9 @@ import { findInterval } from './bisect.js';
 import { locateMass, type MassBlend } from './massBlend.js';
 import { blendRun, writeStateRow, allocateStateColumns, type StateColumns } from './gridQuery.js';
 import { MAX_AGE } from '../model/limits.js';
+import { PHASE_INDEX } from '../model/phases.js';
+
+const BLACK_HOLE = PHASE_INDEX['black-hole'];
 
 /** A fixed set of stars evaluated at many ages (see {@link createPopulationEvaluator}). */
 export interface PopulationEvaluator {
@@ -28,10 +31,15 @@ const INV_LN10 = 1 / Math.LN10;
  * @param grid the grid (built-in or a user's)
  * @param initialMass Msun per star, inside the grid's mass range
  * @param z metal fraction per star (or one for all), inside the grid's z range
+ * @param options `hrOnly`: write only phase, mass, luminosity and teff (what an HR diagram
+ *   draws; the other columns are left as they were), skipping the rest of the arithmetic
  * @throws RangeError naming the star, its value and the grid's range
  * @example createPopulationEvaluator(grid, masses, 0.014).evaluate(ages, out)
  */
-export function createPopulationEvaluator(grid: Grid, initialMass: ArrayLike<number>, z: ArrayLike<number> | number): PopulationEvaluator {
+export function createPopulationEvaluator(
+  grid: Grid, initialMass: ArrayLike<number>, z: ArrayLike<number> | number, options: { hrOnly?: boolean } = {},
+): PopulationEvaluator {
+  const hrOnly = options.hrOnly === true;
   const n = initialMass.length;
   const runs: GridRun[] = [];
   const runId = new Map<GridRun, number>();
@@ -119,7 +127,13 @@ export function createPopulationEvaluator(grid: Grid, initialMass: ArrayLike<num
             if (R0[2] > R0[1]) R0[2] = R0[1];
           } else if (w >= 0.5) R0.set(R1);
         }
-        writeStateRow(o, s, R0);
+        if (hrOnly) {
+          o.phase[s] = R0[0];
+          o.mass[s] = R0[1];
+          const black = R0[0] === BLACK_HOLE;
+          o.luminosity[s] = black ? 0 : Math.exp(R0[3] * Math.LN10);
+          o.teff[s] = black ? 0 : Math.exp(R0[4] * Math.LN10);
+        } else writeStateRow(o, s, R0);
       }
       return o;
     },

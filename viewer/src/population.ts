@@ -59,7 +59,7 @@ export function createPopulation(grid: Grid, stars: { initialMass: ArrayLike<num
   const z = sameZ ? zs[0] : zs;
   const query = createGridQuery(grid);
   // the stars keep their mass and z while time runs: blends found once, EEPs followed frame to frame
-  const evaluator = createPopulationEvaluator(grid, initialMass, z);
+  const evaluator = createPopulationEvaluator(grid, initialMass, z, { hrOnly: true }); // a frame draws phase, L and Teff
   const columns = allocateStateColumns(n);
   const age = new Float64Array(n);
   return {
