@@ -112,8 +112,7 @@ export function blendRun(
     let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
     if (bin < 0) bin = 0;
     else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
-    let I = run.ageIndex;
-    if (I.length === 0) I = run.ageIndex = indexRunAges(run.ages, n, run.count); // first use of a loaded run
+    const I = run.ageIndex.length !== 0 ? run.ageIndex : ensureAgeIndex(run);
     const r0 = i * AGE_BINS + bin;
     const r1 = u > 0 ? r0 + AGE_BINS : r0;
     let lo = I[r0] < I[r1] ? I[r0] : I[r1];
@@ -168,6 +167,15 @@ export function blendRun(
   r[7] = run.remnant;
   if (r[2] > r[1]) r[2] = r[1];
   return j;
+}
+
+/**
+ * Builds a loaded run's age index on its first use (kept out of blendRun so that the store
+ * does not slow the hot path).
+ */
+function ensureAgeIndex(run: GridRun): Int16Array {
+  run.ageIndex = indexRunAges(run.ages, run.n, run.count);
+  return run.ageIndex;
 }
 
 /**
