@@ -5,7 +5,7 @@ import { createGridQuery, type GridQuery } from '../lib/interp/gridQuery.js';
 import { accuracySample } from '../lib/interp/accuracySample.js';
 import { monotoneCubic } from '../lib/interp/monotoneCubic.js';
 import { locateMass, type MassBlend } from '../lib/interp/massBlend.js';
-import { REC, REC_STRIDE, type Grid } from '../lib/tracks/grid.js';
+import { prepareRun, REC, REC_STRIDE, type Grid } from '../lib/tracks/grid.js';
 import { serializeGrid, deserializeGrid } from '../lib/tracks/gridCache.js';
 import { PHASE_INDEX } from '../lib/model/phases.js';
 
@@ -16,7 +16,12 @@ beforeAll(() => {
   q = createGridQuery(grid);
 });
 
-const solar = () => grid.slabs.find((s) => s.z === 0.014)!;
+// the solar slab with every run prepared (a loaded run derives its slopes on first use)
+const solar = () => {
+  const slab = grid.slabs.find((s) => s.z === 0.014)!;
+  slab.runs.forEach(prepareRun);
+  return slab;
+};
 
 describe('createGridQuery(grid).star(initialMass, age, z)', () => {
   test('star() is exact at a grid node: a track mass at one of its EEP ages gives that EEP state', () => {

@@ -1,5 +1,5 @@
 import type { Grid, GridRun, GridSlab } from '../tracks/grid.js';
-import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, indexRunAges, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
 
 const INV_AGE_BIN_STEP = 1 / AGE_BIN_STEP;
 import { findInterval } from './bisect.js';
@@ -112,7 +112,7 @@ export function blendRun(
     let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
     if (bin < 0) bin = 0;
     else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
-    const I = run.ageIndex.length !== 0 ? run.ageIndex : ensureAgeIndex(run);
+    const I = run.ageIndex;
     const r0 = i * AGE_BINS + bin;
     const r1 = u > 0 ? r0 + AGE_BINS : r0;
     let lo = I[r0] < I[r1] ? I[r0] : I[r1];
@@ -167,15 +167,6 @@ export function blendRun(
   r[7] = run.remnant;
   if (r[2] > r[1]) r[2] = r[1];
   return j;
-}
-
-/**
- * Builds a loaded run's age index on its first use (kept out of blendRun so that the store
- * does not slow the hot path).
- */
-function ensureAgeIndex(run: GridRun): Int16Array {
-  run.ageIndex = indexRunAges(run.ages, run.n, run.count);
-  return run.ageIndex;
 }
 
 /**

@@ -1,5 +1,5 @@
 import type { GridRun, GridSlab } from '../tracks/grid.js';
-import { MASS_BINS } from '../tracks/grid.js';
+import { MASS_BINS, prepareRun } from '../tracks/grid.js';
 
 /**
  * Where a mass falls in a metallicity slab and the cubic Hermite weights that blend the two
@@ -44,6 +44,7 @@ export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
   const ra = slab.runOf[k];
   if (ra === slab.runOf[k + 1]) {
     const run = slab.runs[ra];
+    if (run.ageIndex.length === 0) prepareRun(run); // a loaded run's first use
     const hM = logM[k + 1] - logM[k];
     let u = (lm - logM[k]) / hM;
     if (u < 0) u = 0;
@@ -63,6 +64,7 @@ export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
   }
   if (lm - logM[k] >= logM[k + 1] - lm) k += 1;
   const run = slab.runs[slab.runOf[k]];
+  if (run.ageIndex.length === 0) prepareRun(run);
   out.run = run;
   out.i = slab.indexInRun[k];
   out.u = 0;

@@ -28,9 +28,14 @@ export interface GridRun {
   /** phase code per EEP (the same for every track of the layout) */
   phase: Uint8Array;
   logM: Float64Array;
-  /** [(track·n + eep)·2] = log10 age/yr, [+1] = its slope */
+  /**
+   * the stored values, column-major: VALUE_COLUMNS[c] of track k at EEP j is
+   * `values[(c·count + k)·n + j]` (masses as fractions of the initial mass)
+   */
+  values: Float64Array;
+  /** [(track·n + eep)·2] = log10 age/yr, [+1] = its slope (empty until prepareRun) */
   ages: Float64Array;
-  /** [(track·n + eep)·REC_STRIDE + REC.x] = column x, [+1] = its slope */
+  /** [(track·n + eep)·REC_STRIDE + REC.x] = column x, [+1] = its slope (empty until prepareRun) */
   rec: Float64Array;
   /**
    * Age index, [track·AGE_BINS + b] = the last EEP whose log age is ≤ AGE_BIN_MIN + b·AGE_BIN_STEP
@@ -194,41 +199,64 @@ function buildRun(members: EepTrack[]): GridRun {
   const n = members[0].n;
   const count = members.length;
   const logM = Float64Array.from(members.map((t) => Math.log10(t.initialMass)));
-  const cols = ['logAge', 'mass', 'coreMass', 'logL', 'logTeff'] as const;
-  const ages = new Float64Array(count * n * 2);
-  const rec = new Float64Array(count * n * REC_STRIDE);
-  const value = new Float64Array(count * n);
-  const slope = new Float64Array(count * n);
-  for (const c of cols) {
-    for (let k = 0; k < count; k++) value.set(members[k][c], k * n);
-    // masses are blended as fractions of the initial mass: smooth across tracks, and the
-    // monotone cubic keeps a fraction ≤ 1 — a star never comes out heavier than at birth
-    if (c === 'mass' || c === 'coreMass') {
-      for (let k = 0; k < count; k++) {
-        const inv = 1 / members[k].initialMass;
-        for (let j = 0; j < n; j++) value[k * n + j] *= inv;
-      }
+  const values = new Float64Array(VALUE_COLUMNS.length * count * n);
+  VALUE_COLUMNS.forEach((c, ci) => {
+    const off = ci * count * n;
+    for (let k = 0; k < count; k++) {
+      const col = members[k][c];
+      // masses are blended as fractions of the initial mass: smooth across tracks, and the
+      // monotone cubic keeps a fraction ≤ 1 — a star never comes out heavier than at birth
+      const scale = c === 'mass' || c === 'coreMass' ? 1 / members[k].initialMass : 1;
+      for (let j = 0; j < n; j++) values[off + k * n + j] = col[j] * scale;
     }
-    runSlopes(logM, n, value, slope);
-    const [dst, stride, off] = c === 'logAge' ? [ages, 2, 0] : [rec, REC_STRIDE, REC[c]];
-    for (let p = 0; p < count * n; p++) {
-      dst[p * stride + off] = value[p];
-      dst[p * stride + off + 1] = slope[p];
-    }
-  }
-  return {
+  });
+  const run: GridRun = {
     layout: members[0].layout,
     n,
     count,
     phase: members[0].phase.slice(),
     logM,
-    ages,
-    rec,
-    ageIndex: indexRunAges(ages, n, count),
+    values,
+    ages: new Float64Array(0),
+    rec: new Float64Array(0),
+    ageIndex: new Int16Array(0),
     logMsLifetime: Float64Array.from(members.map((t) => (t.msLifetime > 0 ? Math.log10(t.msLifetime) : 0))),
     remnantMass: Float64Array.from(members.map((t) => t.remnantMass)),
     remnant: REMNANT_CODES.indexOf(members[0].remnant),
   };
+  prepareRun(run);
+  return run;
+}
+
+/** The columns a run stores, in the order of {@link GridRun.values}. */
+export const VALUE_COLUMNS = ['logAge', 'mass', 'coreMass', 'logL', 'logTeff'] as const;
+
+/**
+ * Makes a run ready for interpolation from its stored values: the Steffen slopes of every
+ * column across the run's masses (runSlopes), interleaved with the values into `ages` and
+ * `rec` in the layout the hot loop reads, and the age index (indexRunAges). The grid cache
+ * stores values only, so a loaded run is prepared on its first use (locateMass calls this),
+ * and loading stays a file read. Does nothing for a prepared run.
+ */
+export function prepareRun(run: GridRun): void {
+  if (run.ageIndex.length !== 0) return;
+  const { n, count, logM, values } = run;
+  const cn = count * n;
+  const ages = new Float64Array(cn * 2);
+  const rec = new Float64Array(cn * REC_STRIDE);
+  const slope = new Float64Array(cn);
+  VALUE_COLUMNS.forEach((c, ci) => {
+    const value = values.subarray(ci * cn, (ci + 1) * cn);
+    runSlopes(logM, n, value, slope);
+    const [dst, stride, off] = c === 'logAge' ? [ages, 2, 0] : [rec, REC_STRIDE, REC[c]];
+    for (let p = 0; p < cn; p++) {
+      dst[p * stride + off] = value[p];
+      dst[p * stride + off + 1] = slope[p];
+    }
+  });
+  run.ages = ages;
+  run.rec = rec;
+  run.ageIndex = indexRunAges(ages, n, count);
 }
 
 /**

@@ -1,7 +1,7 @@
-import { gridOfSlabs, indexSlabMasses, REC_STRIDE, type Grid, type GridRun, type GridSlab } from './grid.js';
+import { gridOfSlabs, indexSlabMasses, VALUE_COLUMNS, type Grid, type GridRun, type GridSlab } from './grid.js';
 
-const MAGIC = 'starclock-grid-cache 1';
-const RUN_F64 = ['logM', 'ages', 'rec', 'logMsLifetime', 'remnantMass'] as const;
+const MAGIC = 'starclock-grid-cache 2';
+const RUN_F64 = ['logM', 'values', 'logMsLifetime', 'remnantMass'] as const;
 
 interface Header {
   magic: string;
@@ -12,10 +12,10 @@ interface Header {
 }
 
 /**
- * Serialises a ready grid (columns and precomputed slopes) into one byte buffer: a JSON
- * header, padded to 8 bytes, then the Float64 columns in a fixed order. Loading it back
- * (deserializeGrid) makes typed-array views with no copying, so a grid is ready in the time
- * it takes to read the file.
+ * Serialises a grid into one byte buffer: a JSON header, padded to 8 bytes, then each run's
+ * stored values (not the slopes, which prepareRun derives on a run's first use) as Float64
+ * columns in a fixed order. Loading it back (deserializeGrid) makes typed-array views with no
+ * copying, so a grid is ready in the time it takes to read the file.
  */
 export function serializeGrid(grid: Grid): Uint8Array {
   const header: Header = {
@@ -31,7 +31,7 @@ export function serializeGrid(grid: Grid): Uint8Array {
   for (const s of grid.slabs) {
     bytes += s.logM.length * 8;
     for (const r of s.runs) {
-      bytes += 8 * (r.count + (2 + REC_STRIDE) * r.count * r.n + 2 * r.count) + Math.ceil(r.n / 8) * 8;
+      bytes += 8 * (r.count + VALUE_COLUMNS.length * r.count * r.n + 2 * r.count) + Math.ceil(r.n / 8) * 8;
     }
   }
   const out = new Uint8Array(bytes);
@@ -86,7 +86,8 @@ export function deserializeGrid(bytes: Uint8Array): Grid {
       const cn = hr.count * hr.n;
       const run: GridRun = {
         layout: hr.layout, n: hr.n, count: hr.count, remnant: hr.remnant,
-        logM: f(hr.count), ages: f(2 * cn), rec: f(REC_STRIDE * cn), ageIndex: new Int16Array(0),
+        logM: f(hr.count), values: f(VALUE_COLUMNS.length * cn),
+        ages: new Float64Array(0), rec: new Float64Array(0), ageIndex: new Int16Array(0),
         logMsLifetime: f(hr.count), remnantMass: f(hr.count),
         phase: new Uint8Array(bytes.buffer, off, hr.n),
       };
