@@ -1,31 +1,13 @@
 import { assertInRange } from './assertInRange.js';
-import { blackbodyXyz } from './blackbodyXyz.js';
-import { C2_RADIATION, TEFF_MAX, TEFF_MIN } from './constants.js';
+import { TEFF_MAX, TEFF_MIN } from './constants.js';
+import { planckianXyz } from './planckianXyz.js';
 import { srgbTransfer } from './srgbTransfer.js';
 import { xyzToLinearSrgb } from './xyzToLinearSrgb.js';
 
-/** Normalised XYZ of the Planckian locus on a log10 Teff grid (0.004 dex), so a call costs
- * one lookup and a linear blend instead of 471 exponentials. Nodes are filled on first use
- * (NaN marks an empty node), so loading the module costs nothing. The linear interpolation
- * error is below 1e-6 in chromaticity (see tests). */
-const LOG_MIN = Math.log10(TEFF_MIN);
-const LOG_MAX = Math.log10(TEFF_MAX);
-const STEP = 0.004;
-const NG = Math.round((LOG_MAX - LOG_MIN) / STEP) + 1;
-const GX = new Float64Array(NG).fill(NaN);
-const GY = new Float64Array(NG);
-const GZ = new Float64Array(NG);
-const XYZ = new Float64Array(3);
-function node(i: number): void {
-  if (GX[i] === GX[i]) return;
-  blackbodyXyz(10 ** (LOG_MIN + i * STEP), C2_RADIATION, XYZ);
-  GX[i] = XYZ[0];
-  GY[i] = XYZ[1];
-  GZ[i] = XYZ[2];
-}
 const HEX: string[] = [];
 for (let i = 0; i < 256; i++) HEX.push(i.toString(16).padStart(2, '0'));
 const RGB = new Float64Array(3);
+const XYZ = new Float64Array(3);
 
 /**
  * The colour of a blackbody of the given temperature as seen, as an sRGB hex string
@@ -46,17 +28,8 @@ const RGB = new Float64Array(3);
  */
 export function blackbodyColor(teff: number): string {
   assertInRange('teff', teff, TEFF_MIN, TEFF_MAX, 'K');
-  const p = (Math.log10(teff) - LOG_MIN) / STEP;
-  let i = Math.floor(p);
-  if (i >= NG - 1) i = NG - 2;
-  if (i < 0) i = 0;
-  const u = p - i;
-  node(i);
-  node(i + 1);
-  const X = GX[i] + u * (GX[i + 1] - GX[i]);
-  const Y = GY[i] + u * (GY[i + 1] - GY[i]);
-  const Z = GZ[i] + u * (GZ[i + 1] - GZ[i]);
-  xyzToLinearSrgb(X, Y, Z, RGB);
+  planckianXyz(teff, XYZ);
+  xyzToLinearSrgb(XYZ[0], XYZ[1], XYZ[2], RGB);
   const r = RGB[0] > 0 ? RGB[0] : 0;
   const g = RGB[1] > 0 ? RGB[1] : 0;
   const b = RGB[2] > 0 ? RGB[2] : 0;

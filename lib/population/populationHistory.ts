@@ -4,9 +4,8 @@ import { allocateStateColumns } from '../interp/gridQuery.js';
 import { isochrone } from '../interp/isochrone.js';
 import { PHASES, PHASE_INDEX, type Phase } from '../model/phases.js';
 import { absoluteVisualMagnitude } from '../physics/absoluteVisualMagnitude.js';
-import { blackbodyXyz } from '../physics/blackbodyXyz.js';
+import { planckianXyz } from '../physics/planckianXyz.js';
 import { bvColor } from '../physics/bvColor.js';
-import { C2_RADIATION, TEFF_MAX, TEFF_MIN } from '../physics/constants.js';
 import { srgbTransfer } from '../physics/srgbTransfer.js';
 import { xyzToLinearSrgb } from '../physics/xyzToLinearSrgb.js';
 import { samplePopulation, type PopulationSample } from './samplePopulation.js';
@@ -45,23 +44,7 @@ function historyTimes(h: HistorySpec): number[] {
   return times;
 }
 
-// Chromaticities of blackbodies on a log10 Teff grid (0.004 dex), filled on first use, so a star
-// costs one lookup and a blend instead of 471 exponentials (the step blackbodyColor also uses).
-const LOG_MIN = Math.log10(TEFF_MIN);
-const LOG_MAX = Math.log10(TEFF_MAX);
-const STEP = 0.004;
-const NG = Math.round((LOG_MAX - LOG_MIN) / STEP) + 1;
-const CX = new Float64Array(NG).fill(NaN);
-const CY = new Float64Array(NG);
-const CZ = new Float64Array(NG);
 const XYZ = new Float64Array(3);
-function chromaNode(i: number): void {
-  if (CX[i] === CX[i]) return;
-  blackbodyXyz(10 ** (LOG_MIN + i * STEP), C2_RADIATION, XYZ);
-  CX[i] = XYZ[0];
-  CY[i] = XYZ[1];
-  CZ[i] = XYZ[2];
-}
 const HEX: string[] = [];
 for (let i = 0; i < 256; i++) HEX.push(i.toString(16).padStart(2, '0'));
 
@@ -206,16 +189,10 @@ export function populationHistory(
       const fv = 10 ** (-0.4 * absoluteVisualMagnitude(l, T));
       sums.add(1, fv);
       sums.add(2, fv * 10 ** (-0.4 * bvColor(T)));
-      let g = (Math.log10(T) - LOG_MIN) / STEP;
-      let j = Math.floor(g);
-      if (j >= NG - 1) j = NG - 2;
-      if (j < 0) j = 0;
-      g -= j;
-      chromaNode(j);
-      chromaNode(j + 1);
-      const cx = CX[j] + g * (CX[j + 1] - CX[j]);
-      const cy = CY[j] + g * (CY[j + 1] - CY[j]);
-      const cz = CZ[j] + g * (CZ[j + 1] - CZ[j]);
+      planckianXyz(T, XYZ);
+      const cx = XYZ[0];
+      const cy = XYZ[1];
+      const cz = XYZ[2];
       const s = fv / cy;
       sums.add(3, cx * s);
       sums.add(4, fv);
