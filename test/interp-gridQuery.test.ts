@@ -4,7 +4,7 @@ import { loadBuiltinGrid } from '../lib/io/loadBuiltinGrid.js';
 import { createGridQuery, type GridQuery } from '../lib/interp/gridQuery.js';
 import { accuracySample } from '../lib/interp/accuracySample.js';
 import { monotoneCubic } from '../lib/interp/monotoneCubic.js';
-import { locateMass, type MassBlend } from '../lib/interp/massBlend.js';
+import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LM } from '../lib/interp/massBlend.js';
 import { prepareRun, REC, REC_STRIDE, type Grid } from '../lib/tracks/grid.js';
 import { serializeGrid, deserializeGrid } from '../lib/tracks/gridCache.js';
 import { PHASE_INDEX } from '../lib/model/phases.js';
@@ -45,15 +45,17 @@ describe('createGridQuery(grid).star(initialMass, age, z)', () => {
     const j = Math.floor(run.n / 2);
     const ys = Array.from({ length: run.count }, (_, k) => run.rec[(k * run.n + j) * REC_STRIDE + REC.logL]);
     const f = monotoneCubic(run.logM, ys);
-    const mb = {} as MassBlend;
+    const mb = createMassBlend();
     for (const frac of [0.13, 0.5, 0.77]) {
       const k = Math.floor(run.count / 2);
       const lm = run.logM[k] + frac * (run.logM[k + 1] - run.logM[k]);
       const firstTrack = slab.runOf.indexOf(slab.runs.indexOf(run));
-      locateMass(slab, lm, mb);
+      mb.w[W_LM] = lm;
+      locateMass(slab, mb);
       expect(mb.i + firstTrack).toBeGreaterThanOrEqual(0);
-      const v = mb.c00 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL] + mb.c10 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL + 1]
-        + mb.c01 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL] + mb.c11 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL + 1];
+      const [c00, c01, c10, c11] = [mb.w[W_C00], mb.w[W_C01], mb.w[W_C10], mb.w[W_C11]];
+      const v = c00 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL] + c10 * run.rec[(mb.b0 + j) * REC_STRIDE + REC.logL + 1]
+        + c01 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL] + c11 * run.rec[(mb.b1 + j) * REC_STRIDE + REC.logL + 1];
       expect(v).toBeCloseTo(f(lm), 12);
     }
   });

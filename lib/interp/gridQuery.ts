@@ -3,7 +3,8 @@ import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, REC_STRIDE, REMNANT_CODES } from '
 
 const INV_AGE_BIN_STEP = 1 / AGE_BIN_STEP;
 import { findInterval } from './bisect.js';
-import { locateMass, type MassBlend } from './massBlend.js';
+import { exp10 } from './exp10.js';
+import { createMassBlend, locateMass, type MassBlend, W_C00, W_C01, W_C10, W_C11, W_LA, W_LM, W_M, W_U } from './massBlend.js';
 import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
 import type { StarState } from '../model/starState.js';
@@ -60,36 +61,62 @@ const LOG_TEFF_SUN = Math.log10(TEFF_SUN);
 /** log10 of GM☉/R☉² in cgs (IAU 2015 nominal values): log g = this + log M − 2 log R. */
 const LOGG_SUN = Math.log10((1.3271244e20 / 6.957e8 ** 2) * 100);
 const BLACK_HOLE = PHASE_INDEX['black-hole'];
-const LN10 = Math.LN10;
 const INV_LN10 = 1 / Math.LN10;
-/** 10^x through Math.exp, several times faster than `**` in V8 (agrees to ~1e-15 relative). */
-const exp10 = (x: number) => Math.exp(x * LN10);
 /** log10 through Math.log (agrees with Math.log10 to ~1e-16 absolute). */
 const log10 = (x: number) => Math.log(x) * INV_LN10;
 
+/** The hot loop's blend scratch: the star's coordinates and mass weights (see MassBlend). */
+const MB: MassBlend = createMassBlend();
+const MW = MB.w;
 /**
- * Evaluates one metallicity slab at log10 mass `lm` and log10 age `la` into `r`.
- * Mass: see locateMass. Age: the EEP index whose interpolated log age
- * brackets `la` is found by bisection, and the state is blended linearly in log age between
- * the two EEPs.
+ * Where the star's z falls among the grid's metallicities (set by locateZ): ZK[0] the lower
+ * slab, ZW[0] the weight of the upper one (0: the lower slab alone). Typed slots, not
+ * arguments: see MassBlend.
  */
-const MB: MassBlend = { run: undefined as unknown as GridRun, b0: 0, b1: 0, i: 0, u: 0, c00: 1, c01: 0, c10: 0, c11: 0 };
+const ZK = new Int32Array(1);
+const ZW = new Float64Array(1);
 
-function evalSlab(slab: GridSlab, lm: number, m: number, la: number, r: Float64Array): void {
-  locateMass(slab, lm, MB);
-  blendRun(MB.run, MB.b0, MB.b1, MB.c00, MB.c01, MB.c10, MB.c11, MB.i, MB.u, m, la, -1, r);
+/** Sets ZK, ZW for log10 z `lz` (one slab: 0, 0; at or past a node: that node alone). */
+function locateZ(grid: Grid, lz: number): void {
+  if (grid.slabs.length === 1) {
+    ZK[0] = 0;
+    ZW[0] = 0;
+    return;
+  }
+  const k = findInterval(grid.logZ, lz);
+  const w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
+  ZK[0] = w >= 1 ? k + 1 : k;
+  ZW[0] = w > 0 && w < 1 ? w : 0;
 }
 
 /**
- * The state at log age `la` of the star blended from a run's tracks with the Hermite weights
- * c·· (see locateMass), into `r`; returns the EEP index used. `hint` is an EEP index to try
- * first (a star's index at its previous age, −1 for none): when the age moved little, the
- * search is a comparison or two instead of a bisection.
+ * Evaluates one metallicity slab at the star in MB (log10 mass, mass, log10 age) into `r`.
+ * Mass: see locateMass. Age: see blendRun.
  */
-export function blendRun(
-  run: GridRun, b0: number, b1: number, c00: number, c01: number, c10: number, c11: number,
-  i: number, u: number, m: number, la: number, hint: number, r: Float64Array,
-): number {
+function evalSlab(slab: GridSlab, r: Float64Array): void {
+  locateMass(slab, MB);
+  blendRun(MB, -1, r);
+}
+
+/**
+ * The state at log age `mb.w[W_LA]` of the star of initial mass `mb.w[W_M]` blended from a
+ * run's tracks with the Hermite weights in `mb` (see locateMass), into `r` (phase, mass, core
+ * mass, log L, log Teff, log msLifetime, remnant mass, remnant code); returns the EEP index
+ * used. The EEP whose interpolated log age brackets the age asked is found by bisection in the
+ * span the run's age index allows, and the state is blended linearly in log age between it
+ * and the next EEP. `hint` is an EEP index to try first (a star's index at its previous age,
+ * −1 for none): when the age moved little, the search is a comparison or two instead.
+ */
+export function blendRun(mb: MassBlend, hint: number, r: Float64Array): number {
+  const run = mb.run;
+  const b0 = mb.b0;
+  const b1 = mb.b1;
+  const i = mb.i;
+  const w = mb.w;
+  const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11];
+  const u = w[W_U];
+  const m = w[W_M];
+  const la = w[W_LA];
   const n = run.n;
   const A = run.ages;
   // last j with age(j) <= la; A holds (log age, slope) pairs
@@ -100,7 +127,7 @@ export function blendRun(
   if (!(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
     j = 0;
     phi = 0;
-  } else if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, c00, c01, c10, c11, n, la, hint)) >= 0) {
+  } else if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, w, n, hint)) >= 0) {
     const x0 = a0i + 2 * j;
     const x1 = a1i + 2 * j;
     const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
@@ -144,8 +171,8 @@ export function blendRun(
   const q1 = (b1 + j) * REC_STRIDE;
   // next EEP's records (the same ones when phi = 0, so no read past the run)
   const step = phi > 0 ? REC_STRIDE : 0;
-  const w = 1 - phi;
-  const e0 = c00 * w, e1 = c01 * w, f0 = c10 * w, f1 = c11 * w;
+  const psi = 1 - phi;
+  const e0 = c00 * psi, e1 = c01 * psi, f0 = c10 * psi, f1 = c11 * psi;
   const g0 = c00 * phi, g1 = c01 * phi, h0 = c10 * phi, h1 = c11 * phi;
   for (let c = 0; c < REC_STRIDE; c += 2) {
     const x0 = q0 + c;
@@ -171,14 +198,20 @@ export function blendRun(
 
 /**
  * From EEP `hint`, steps up or down (at most 6 steps) to the last EEP whose interpolated log
- * age is ≤ la; −1 when it is further away (the caller then searches).
+ * age is ≤ the age asked (w[W_LA]); −1 when it is further away (the caller then searches).
  */
-function walkFrom(A: Float64Array, a0i: number, a1i: number, c00: number, c01: number, c10: number, c11: number, n: number, la: number, hint: number): number {
+function walkFrom(A: Float64Array, a0i: number, a1i: number, w: Float64Array, n: number, hint: number): number {
+  const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11];
+  const la = w[W_LA];
   let j = hint;
-  const age = (k: number) => c00 * A[a0i + 2 * k] + c10 * A[a0i + 2 * k + 1] + c01 * A[a1i + 2 * k] + c11 * A[a1i + 2 * k + 1];
-  if (age(j) <= la) {
+  let x0 = a0i + 2 * j;
+  let x1 = a1i + 2 * j;
+  if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) {
     for (let s = 0; s < 6; s++) {
-      if (j >= n - 1 || age(j + 1) > la) return j;
+      if (j >= n - 1) return j;
+      x0 += 2;
+      x1 += 2;
+      if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] > la) return j;
       j++;
     }
     return -1;
@@ -186,33 +219,25 @@ function walkFrom(A: Float64Array, a0i: number, a1i: number, c00: number, c01: n
   for (let s = 0; s < 6; s++) {
     if (j <= 0) return -1;
     j--;
-    if (age(j) <= la) return j;
+    x0 -= 2;
+    x1 -= 2;
+    if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) return j;
   }
   return -1;
 }
 
 /**
- * Evaluates the grid at (log M, log age, log Z) into R0: the two slabs bracketing log Z
- * are blended linearly in log Z when they agree on the phase, else the nearer one answers.
+ * Evaluates the grid at the star in MB and the metallicity position in ZK, ZW into R0: the
+ * two slabs bracketing log Z are blended linearly in log Z when they agree on the phase, else
+ * the nearer one answers.
  */
-function evalGrid(grid: Grid, lm: number, m: number, la: number, lz: number): void {
+function evalGrid(grid: Grid): void {
   const slabs = grid.slabs;
-  if (slabs.length === 1) {
-    evalSlab(slabs[0], lm, m, la, R0);
-    return;
-  }
-  const k = findInterval(grid.logZ, lz);
-  let w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
-  if (w <= 0) {
-    evalSlab(slabs[k], lm, m, la, R0);
-    return;
-  }
-  if (w >= 1) {
-    evalSlab(slabs[k + 1], lm, m, la, R0);
-    return;
-  }
-  evalSlab(slabs[k], lm, m, la, R0);
-  evalSlab(slabs[k + 1], lm, m, la, R1);
+  const k = ZK[0];
+  const w = ZW[0];
+  evalSlab(slabs[k], R0);
+  if (w === 0) return;
+  evalSlab(slabs[k + 1], R1);
   if (R0[0] !== R1[0] || R0[7] !== R1[7]) {
     if (w >= 0.5) R0.set(R1);
     return;
@@ -221,7 +246,6 @@ function evalGrid(grid: Grid, lm: number, m: number, la: number, lz: number): vo
   for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
   if (R0[2] > R0[1]) R0[2] = R0[1];
 }
-
 
 /**
  * Writes one star's numeric state from an evaluation result `r` (phase, mass, core mass,
@@ -281,7 +305,11 @@ export function createGridQuery(grid: Grid): GridQuery {
     grid,
     star(initialMass: number, age: number, z: number): StarState {
       checkStar(initialMass, age, z);
-      evalGrid(grid, Math.log10(initialMass), initialMass, Math.log10(age), Math.log10(z));
+      MW[W_M] = initialMass;
+      MW[W_LM] = Math.log10(initialMass);
+      MW[W_LA] = Math.log10(age);
+      locateZ(grid, Math.log10(z));
+      evalGrid(grid);
       return observeState(
         initialMass, z, age, R0[0], R0[1], R0[2], R0[3], R0[4],
         R0[5] === 0 ? 0 : 10 ** R0[5], REMNANT_CODES[R0[7]], R0[6],
@@ -296,7 +324,7 @@ export function createGridQuery(grid: Grid): GridQuery {
       if (o.mass.length < n) throw new RangeError(`columns: output holds ${o.mass.length} stars, need ${n}`);
       const zs = input.z;
       const zScalar = typeof zs === 'number';
-      const lzScalar = zScalar ? Math.log10(zs) : 0;
+      if (zScalar) locateZ(grid, Math.log10(zs));
       const mMin = massRange.min;
       const mMax = massRange.max;
       const zMin = zRange.min;
@@ -315,7 +343,11 @@ export function createGridQuery(grid: Grid): GridQuery {
           o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
           continue;
         }
-        evalGrid(grid, log10(m), m, log10(age), zScalar ? lzScalar : log10(z));
+        MW[W_M] = m;
+        MW[W_LM] = log10(m);
+        MW[W_LA] = log10(age);
+        if (!zScalar) locateZ(grid, log10(z));
+        evalGrid(grid);
         writeStateRow(o, s, R0);
       }
       return o;

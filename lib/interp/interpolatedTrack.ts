@@ -1,7 +1,7 @@
 import type { Grid, GridSlab } from '../tracks/grid.js';
 import { REC, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
 import { findInterval } from './bisect.js';
-import { locateMass, type MassBlend } from './massBlend.js';
+import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LM, W_U } from './massBlend.js';
 import type { RemnantKind } from '../model/phases.js';
 
 /** A track interpolated from a grid at one initial mass and z, EEP by EEP. */
@@ -22,9 +22,12 @@ export interface InterpolatedTrack {
 }
 
 function slabTrack(slab: GridSlab, lm: number) {
-  const mb = {} as MassBlend;
-  locateMass(slab, lm, mb);
-  const { run, b0, b1, c00, c01, c10, c11 } = mb;
+  const mb = createMassBlend();
+  mb.w[W_LM] = lm;
+  locateMass(slab, mb);
+  const { run, b0, b1 } = mb;
+  const w = mb.w;
+  const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11], u = w[W_U];
   const n = run.n;
   const out = { n, logAge: new Float64Array(n), cols: new Float64Array(n * 4), phase: run.phase, layout: run.layout, msl: 0, rm: 0, remnant: run.remnant };
   for (let j = 0; j < n; j++) {
@@ -39,9 +42,9 @@ function slabTrack(slab: GridSlab, lm: number) {
     }
   }
   const t0 = mb.i;
-  const t1 = mb.u > 0 ? t0 + 1 : t0;
-  out.msl = run.logMsLifetime[t0] * (1 - mb.u) + run.logMsLifetime[t1] * mb.u;
-  out.rm = run.remnantMass[t0] * (1 - mb.u) + run.remnantMass[t1] * mb.u;
+  const t1 = u > 0 ? t0 + 1 : t0;
+  out.msl = run.logMsLifetime[t0] * (1 - u) + run.logMsLifetime[t1] * u;
+  out.rm = run.remnantMass[t0] * (1 - u) + run.remnantMass[t1] * u;
   return out;
 }
 

@@ -2,7 +2,7 @@ import type { Grid, GridRun } from '../tracks/grid.js';
 import { layoutPrimaryEeps } from '../tracks/layoutPrimaryEeps.js';
 import type { Eep } from '../tracks/track.js';
 import { findInterval } from './bisect.js';
-import { locateMass, type MassBlend } from './massBlend.js';
+import { createMassBlend, locateMass, W_LM } from './massBlend.js';
 
 /**
  * The primary EEPs of `interpolatedTrack(grid, initialMass, z)`: the EEP layout that track
@@ -25,9 +25,10 @@ export function interpolatedTrackEeps(grid: Grid, initialMass: number, z: number
     throw new RangeError(`z ${z} outside the ${grid.source} grid's ${grid.zRange.min}–${grid.zRange.max}`);
   }
   const lm = Math.log10(initialMass);
-  const mb = {} as MassBlend;
+  const mb = createMassBlend();
+  mb.w[W_LM] = lm;
   const runAt = (k: number): GridRun => {
-    locateMass(grid.slabs[k], lm, mb);
+    locateMass(grid.slabs[k], mb);
     return mb.run;
   };
   let run = runAt(0);

@@ -2,33 +2,55 @@ import type { GridRun, GridSlab } from '../tracks/grid.js';
 import { MASS_BINS, prepareRun } from '../tracks/grid.js';
 
 /**
- * Where a mass falls in a metallicity slab and the cubic Hermite weights that blend the two
- * bracketing tracks there: value = c00·y₀ + c10·y₀′ + c01·y₁ + c11·y₁′, with y′ the
- * precomputed Steffen slopes in log M (already scaled by the interval width here).
+ * Slots of {@link MassBlend.w}. The Hermite weights blend the two bracketing tracks:
+ * value = c00·y₀ + c10·y₀′ + c01·y₁ + c11·y₁′, with y′ the precomputed Steffen slopes in
+ * log M (already scaled by the interval width here); u is the fraction of the way from the
+ * lower track to the upper one (0 when one track answers); m, lm and la are the star's
+ * initial mass, its log10 and the log10 age asked, set by the caller.
+ */
+export const W_C00 = 0;
+export const W_C01 = 1;
+export const W_C10 = 2;
+export const W_C11 = 3;
+export const W_U = 4;
+export const W_M = 5;
+export const W_LM = 6;
+export const W_LA = 7;
+export const W_SLOTS = 8;
+
+/**
+ * Where a mass falls in a metallicity slab, and the star being asked. The numbers that are
+ * not integers live in the typed array `w` (slots W_*) rather than in arguments: V8 boxes
+ * every double passed to a function it does not inline, and the interpolator's hot loop
+ * (locateMass, blendRun) would otherwise allocate a dozen heap numbers per star.
  */
 export interface MassBlend {
   run: GridRun;
   /** first EEP index of the lower and upper track in the run's track-major arrays */
   b0: number;
   b1: number;
-  /** lower track's position in the run and the fraction toward the upper one (0 when single) */
+  /** lower track's position in the run */
   i: number;
-  u: number;
-  c00: number;
-  c01: number;
-  c10: number;
-  c11: number;
+  /** weights and the star's coordinates: see W_C00 … W_LA */
+  w: Float64Array;
+}
+
+/** A blank MassBlend to be filled by locateMass. */
+export function createMassBlend(): MassBlend {
+  return { run: undefined as unknown as GridRun, b0: 0, b1: 0, i: 0, w: new Float64Array(W_SLOTS) };
 }
 
 /**
- * Fills `out` for log10 initial mass `lm` in `slab`: the Hermite cubic between the two
+ * Fills `out` for the log10 initial mass in `out.w[W_LM]` in `slab`: the Hermite cubic between the two
  * bracketing tracks with their Steffen slopes — the monotone cubic through the four nearest
  * tracks of a run (linear where the run has only two) — or, when the two bracketing tracks
  * belong to different EEP layouts (either side of the helium-flash mass, of the white-dwarf /
  * neutron-star / black-hole boundaries…), the nearer track alone: the grid never blends
  * tracks that do not share their EEPs. Masses outside the slab take its end track.
  */
-export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
+export function locateMass(slab: GridSlab, out: MassBlend): void {
+  const w = out.w;
+  const lm = w[W_LM];
   const logM = slab.logM;
   let k: number;
   if (logM.length < 3) k = 0;
@@ -53,13 +75,13 @@ export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
     const v = 1 - u;
     out.run = run;
     out.i = i;
-    out.u = u;
     out.b0 = i * run.n;
     out.b1 = out.b0 + run.n;
-    out.c00 = (1 + 2 * u) * v * v;
-    out.c01 = u * u * (3 - 2 * u);
-    out.c10 = u * v * v * hM;
-    out.c11 = u * u * (u - 1) * hM;
+    w[W_U] = u;
+    w[W_C00] = (1 + 2 * u) * v * v;
+    w[W_C01] = u * u * (3 - 2 * u);
+    w[W_C10] = u * v * v * hM;
+    w[W_C11] = u * u * (u - 1) * hM;
     return;
   }
   if (lm - logM[k] >= logM[k + 1] - lm) k += 1;
@@ -67,11 +89,11 @@ export function locateMass(slab: GridSlab, lm: number, out: MassBlend): void {
   if (run.ageIndex.length === 0) prepareRun(run);
   out.run = run;
   out.i = slab.indexInRun[k];
-  out.u = 0;
   out.b0 = out.i * run.n;
   out.b1 = out.b0;
-  out.c00 = 1;
-  out.c01 = 0;
-  out.c10 = 0;
-  out.c11 = 0;
+  w[W_U] = 0;
+  w[W_C00] = 1;
+  w[W_C01] = 0;
+  w[W_C10] = 0;
+  w[W_C11] = 0;
 }

@@ -1,6 +1,7 @@
 import type { Grid, GridRun } from '../tracks/grid.js';
 import { findInterval } from './bisect.js';
-import { locateMass, type MassBlend } from './massBlend.js';
+import { exp10 } from './exp10.js';
+import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LA, W_LM, W_M, W_U } from './massBlend.js';
 import { blendRun, writeStateRow, allocateStateColumns, type StateColumns } from './gridQuery.js';
 import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
@@ -60,7 +61,8 @@ export function createPopulationEvaluator(
   const hint = new Int32Array(2 * n).fill(-1);
   const zw = new Float64Array(n); // weight of the upper slab (0: lower only)
   const mass = Float64Array.from(initialMass);
-  const mb = {} as MassBlend;
+  const mb = createMassBlend();
+  const mw = mb.w;
   const { massRange, zRange, source } = grid;
   for (let s = 0; s < n; s++) {
     const m = initialMass[s];
@@ -80,25 +82,36 @@ export function createPopulationEvaluator(
       }
     }
     zw[s] = w;
-    const lm = Math.log10(m);
+    mw[W_LM] = Math.log10(m);
     for (let side = 0; side < (w > 0 ? 2 : 1); side++) {
-      locateMass(grid.slabs[k + side], lm, mb);
+      locateMass(grid.slabs[k + side], mb);
       const p = 2 * s + side;
       rid[p] = idOf(mb.run);
       base[2 * p] = mb.b0;
       base[2 * p + 1] = mb.b1;
       track[2 * p] = mb.i;
-      track[2 * p + 1] = mb.u;
-      wts[4 * p] = mb.c00;
-      wts[4 * p + 1] = mb.c01;
-      wts[4 * p + 2] = mb.c10;
-      wts[4 * p + 3] = mb.c11;
+      track[2 * p + 1] = mw[W_U];
+      wts[4 * p] = mw[W_C00];
+      wts[4 * p + 1] = mw[W_C01];
+      wts[4 * p + 2] = mw[W_C10];
+      wts[4 * p + 3] = mw[W_C11];
     }
   }
   const R0 = new Float64Array(8);
   const R1 = new Float64Array(8);
-  const side = (p: number, la: number, r: Float64Array, m: number) => {
-    hint[p] = blendRun(runs[rid[p]], base[2 * p], base[2 * p + 1], wts[4 * p], wts[4 * p + 1], wts[4 * p + 2], wts[4 * p + 3], track[2 * p], track[2 * p + 1], m, la, hint[p], r);
+  // one side of star p's blend, at the mass and log age already in mw (doubles go through
+  // the typed scratch, not arguments: see MassBlend)
+  const side = (p: number, r: Float64Array) => {
+    mb.run = runs[rid[p]];
+    mb.b0 = base[2 * p];
+    mb.b1 = base[2 * p + 1];
+    mb.i = track[2 * p] | 0; // an integer, kept a small integer in the shared MassBlend shape
+    mw[W_U] = track[2 * p + 1];
+    mw[W_C00] = wts[4 * p];
+    mw[W_C01] = wts[4 * p + 1];
+    mw[W_C10] = wts[4 * p + 2];
+    mw[W_C11] = wts[4 * p + 3];
+    hint[p] = blendRun(mb, hint[p], r);
   };
   return {
     n,
@@ -115,12 +128,12 @@ export function createPopulationEvaluator(
           continue;
         }
         o.status[s] = 0;
-        const la = Math.log(a) * INV_LN10;
-        const m = mass[s];
-        side(2 * s, la, R0, m);
+        mw[W_LA] = Math.log(a) * INV_LN10;
+        mw[W_M] = mass[s];
+        side(2 * s, R0);
         const w = zw[s];
         if (w > 0) {
-          side(2 * s + 1, la, R1, m);
+          side(2 * s + 1, R1);
           if (R0[0] === R1[0] && R0[7] === R1[7]) {
             const v = 1 - w;
             for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
@@ -131,8 +144,8 @@ export function createPopulationEvaluator(
           o.phase[s] = R0[0];
           o.mass[s] = R0[1];
           const black = R0[0] === BLACK_HOLE;
-          o.luminosity[s] = black ? 0 : Math.exp(R0[3] * Math.LN10);
-          o.teff[s] = black ? 0 : Math.exp(R0[4] * Math.LN10);
+          o.luminosity[s] = black ? 0 : exp10(R0[3]);
+          o.teff[s] = black ? 0 : exp10(R0[4]);
         } else writeStateRow(o, s, R0);
       }
       return o;
