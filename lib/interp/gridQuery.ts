@@ -124,10 +124,8 @@ export function blendRun(mb: MassBlend, hint: number, r: Float64Array): number {
   const a1i = 2 * b1;
   let j: number;
   let phi: number;
-  if (!(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
-    j = 0;
-    phi = 0;
-  } else if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, w, n, hint)) >= 0) {
+  if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, w, n, hint)) >= 0) {
+    // walkFrom found age(j) ≤ la, so the star is past the first EEP
     const x0 = a0i + 2 * j;
     const x1 = a1i + 2 * j;
     const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
@@ -137,32 +135,41 @@ export function blendRun(mb: MassBlend, hint: number, r: Float64Array): number {
   } else {
     // narrow the search with the run's age index (see indexRunAges), then bisect
     let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
-    if (bin < 0) bin = 0;
+    const below = !(bin >= 0); // younger than the index's first edge (or age 0: la = −∞)
+    if (below) bin = 0;
     else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
     const I = run.ageIndex;
     const r0 = i * AGE_BINS + bin;
     const r1 = u > 0 ? r0 + AGE_BINS : r0;
-    let lo = I[r0] < I[r1] ? I[r0] : I[r1];
+    let lo = below ? 0 : I[r0] < I[r1] ? I[r0] : I[r1];
     let hi = I[r0 + 1] > I[r1 + 1] ? I[r0 + 1] : I[r1 + 1];
     if (bin === AGE_BINS - 2) hi = n - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      const x0 = a0i + 2 * mid;
-      const x1 = a1i + 2 * mid;
-      if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
-      else hi = mid - 1;
-    }
-    j = lo;
-    if (j >= n - 1) {
-      j = n - 1;
+    // when the index puts both tracks past their first EEP at the bin's lower edge (≤ la),
+    // the blended first EEP is too (the monotone cubic stays between its nodes): only
+    // otherwise is the star's age compared with the first EEP's, to catch the youngest
+    if (lo === 0 && !(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
+      j = 0;
       phi = 0;
     } else {
-      const x0 = a0i + 2 * j;
-      const x1 = a1i + 2 * j;
-      const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-      const ak = c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3];
-      phi = ak > aj ? (la - aj) / (ak - aj) : 0;
-      if (phi > 1) phi = 1;
+      while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        const x0 = a0i + 2 * mid;
+        const x1 = a1i + 2 * mid;
+        if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
+        else hi = mid - 1;
+      }
+      j = lo;
+      if (j >= n - 1) {
+        j = n - 1;
+        phi = 0;
+      } else {
+        const x0 = a0i + 2 * j;
+        const x1 = a1i + 2 * j;
+        const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
+        const ak = c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3];
+        phi = ak > aj ? (la - aj) / (ak - aj) : 0;
+        if (phi > 1) phi = 1;
+      }
     }
   }
   r[0] = run.phase[j];
@@ -249,24 +256,27 @@ function evalGrid(grid: Grid): void {
 
 /**
  * Writes one star's numeric state from an evaluation result `r` (phase, mass, core mass,
- * log L, log Teff, log msLifetime, remnant mass, remnant code) into row `s` of `o`: L and
+ * log L, log Teff, log msLifetime, remnant mass, remnant code) and the star's MassBlend
+ * scratch `w` (its initial mass and that mass's log10) into row `s` of `o`: L and
  * Teff from their logs, radius by Stefan–Boltzmann, log g from mass and radius, a black hole
  * with L = Teff = 0 and its Schwarzschild radius.
  */
-export function writeStateRow(o: StateColumns, s: number, r: Float64Array): void {
+export function writeStateRow(o: StateColumns, s: number, r: Float64Array, w: Float64Array): void {
   const ph = r[0];
   const mass = r[1];
+  // a star that kept its birth mass has its log already (w: the star's MassBlend scratch)
+  const logMass = mass === w[W_M] ? w[W_LM] : log10(mass);
   const logR = 0.5 * r[3] - 2 * (r[4] - LOG_TEFF_SUN);
   o.phase[s] = ph;
   o.mass[s] = mass;
   o.coreMass[s] = r[2];
-  o.logg[s] = LOGG_SUN + log10(mass) - 2 * logR;
+  o.logg[s] = LOGG_SUN + logMass - 2 * logR;
   if (ph === BLACK_HOLE) {
     const rs = schwarzschildRadius(mass);
     o.luminosity[s] = 0;
     o.teff[s] = 0;
     o.radius[s] = rs;
-    o.logg[s] = LOGG_SUN + log10(mass) - 2 * log10(rs);
+    o.logg[s] = LOGG_SUN + logMass - 2 * log10(rs);
   } else {
     const L = exp10(r[3]);
     const T = exp10(r[4]);
@@ -348,7 +358,7 @@ export function createGridQuery(grid: Grid): GridQuery {
         MW[W_LA] = log10(age);
         if (!zScalar) locateZ(grid, log10(z));
         evalGrid(grid);
-        writeStateRow(o, s, R0);
+        writeStateRow(o, s, R0, MW);
       }
       return o;
     },

@@ -61,6 +61,7 @@ export function createPopulationEvaluator(
   const hint = new Int32Array(2 * n).fill(-1);
   const zw = new Float64Array(n); // weight of the upper slab (0: lower only)
   const mass = Float64Array.from(initialMass);
+  const logMass = mass.map(Math.log10);
   const mb = createMassBlend();
   const mw = mb.w;
   const { massRange, zRange, source } = grid;
@@ -146,7 +147,10 @@ export function createPopulationEvaluator(
           const black = R0[0] === BLACK_HOLE;
           o.luminosity[s] = black ? 0 : exp10(R0[3]);
           o.teff[s] = black ? 0 : exp10(R0[4]);
-        } else writeStateRow(o, s, R0);
+        } else {
+          mw[W_LM] = logMass[s];
+          writeStateRow(o, s, R0, mw);
+        }
       }
       return o;
     },
