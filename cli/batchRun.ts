@@ -54,8 +54,13 @@ export interface BatchSummary {
   filter: boolean;
 }
 
-/** Bytes of input per chunk handed to a worker (whole records; a chunk holds about 30 000 rows of a small table). */
+/** Bytes of input per chunk computed in this thread (whole records; about 30 000 rows of a small table). */
 const CHUNK = 1 << 20;
+/**
+ * Bytes per chunk handed to a worker: smaller, so that the last chunks, computed while the other
+ * workers may have run dry, are short, and no worker waits long on another's chunk.
+ */
+const WORKER_CHUNK = 1 << 18;
 /** A record longer than this is taken for an unclosed quote rather than buffered further. */
 const MAX_RECORD = 64 << 20;
 
@@ -144,9 +149,13 @@ function workerComputer(n: number, plan: BatchPlan, gridBytes: Uint8Array | null
     for (const w of waiting.values()) w.reject(failure);
     waiting.clear();
   };
-  const workers = Array.from({ length: n }, () => {
+  // chunks each worker holds: a chunk goes to the worker with the fewest, so one that is slow
+  // for a while (a chunk of costlier rows, the machine's other work) gets less
+  const load = new Int32Array(n);
+  const workers = Array.from({ length: n }, (_, id) => {
     const worker = new Worker(file, { workerData: { plan, grid: gridBytes } });
     worker.on('message', (m: { seq: number; result: BatchChunkResult }) => {
+      load[id]--;
       const w = waiting.get(m.seq);
       waiting.delete(m.seq);
       w?.resolve(m.result);
@@ -165,7 +174,10 @@ function workerComputer(n: number, plan: BatchPlan, gridBytes: Uint8Array | null
         waiting.set(seq, { resolve, reject });
         // a copy of its own, so the transfer takes nothing the reader still uses
         const copy = new Uint8Array(bytes);
-        workers[seq % n].postMessage({ seq, bytes: copy }, [copy.buffer]);
+        let id = 0;
+        for (let i = 1; i < n; i++) if (load[i] < load[id]) id = i;
+        load[id]++;
+        workers[id].postMessage({ seq, bytes: copy }, [copy.buffer]);
       });
     },
     async close() {
@@ -217,7 +229,8 @@ export async function runBatch(options: BatchRunOptions, io: Io): Promise<BatchS
     if (!toStdout && sameFile(options.rejects, options.output!)) throw new RangeError(`--rejects ${options.rejects} is the output file; choose another`);
   }
 
-  const stream: Readable = fromStdin ? process.stdin : createReadStream(options.input, { highWaterMark: CHUNK });
+  const chunkBytes = options.workers > 1 ? WORKER_CHUNK : CHUNK;
+  const stream: Readable = fromStdin ? process.stdin : createReadStream(options.input, { highWaterMark: chunkBytes });
   const totalBytes = fromStdin ? 0 : (await stat(options.input)).size;
   let plan: BatchPlan | null = null;
   let out: Sink | null = null;
@@ -411,7 +424,7 @@ export async function runBatch(options: BatchRunOptions, io: Io): Promise<BatchS
     }
     await out.write(plan.header);
     computer = options.workers > 1 ? workerComputer(options.workers, plan, options.gridBytes) : await inlineComputer(options.grid, plan);
-    maxInFlight = options.workers > 1 ? 2 * options.workers : 1;
+    maxInFlight = options.workers > 1 ? 4 * options.workers : 1;
     return true;
   };
 
@@ -428,7 +441,7 @@ export async function runBatch(options: BatchRunOptions, io: Io): Promise<BatchS
         if (started) await pump(false);
         continue;
       }
-      if (partsLength >= CHUNK) await pump(false);
+      if (partsLength >= chunkBytes) await pump(false);
     }
     if (!started) started = await begin(true);
     await pump(true);
