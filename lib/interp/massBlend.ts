@@ -52,48 +52,44 @@ export function locateMass(slab: GridSlab, out: MassBlend): void {
   const w = out.w;
   const lm = w[W_LM];
   const logM = slab.logM;
-  let k: number;
-  if (logM.length < 3) k = 0;
-  else {
-    // the mass index gives the last track at or below the bin's edge; step up within the bin
-    let b = Math.floor((lm - slab.massIndexMin) * slab.massIndexScale);
-    if (b < 0) b = 0;
-    else if (b > MASS_BINS) b = MASS_BINS;
-    k = slab.massIndex[b];
-    const last = logM.length - 2;
-    while (k < last && logM[k + 1] <= lm) k++;
-  }
-  const ra = slab.runOf[k];
-  if (ra === slab.runOf[k + 1]) {
-    const run = slab.runs[ra];
-    if (run.ageIndex.length === 0) prepareRun(run); // a loaded run's first use
-    const hM = logM[k + 1] - logM[k];
-    let u = (lm - logM[k]) / hM;
+  let k = massCell(slab, lm);
+  // u: the fraction of the way to the next track; hM the interval (0: one track answers)
+  let u = 0;
+  let hM = 0;
+  if (slab.runOf[k] === slab.runOf[k + 1]) {
+    hM = logM[k + 1] - logM[k];
+    u = (lm - logM[k]) / hM;
     if (u < 0) u = 0;
     else if (u > 1) u = 1;
-    const i = slab.indexInRun[k];
-    const v = 1 - u;
-    out.run = run;
-    out.i = i;
-    out.b0 = i * run.n;
-    out.b1 = out.b0 + run.n;
-    w[W_U] = u;
-    w[W_C00] = (1 + 2 * u) * v * v;
-    w[W_C01] = u * u * (3 - 2 * u);
-    w[W_C10] = u * v * v * hM;
-    w[W_C11] = u * u * (u - 1) * hM;
-    return;
-  }
-  if (lm - logM[k] >= logM[k + 1] - lm) k += 1;
+  } else if (lm - logM[k] >= logM[k + 1] - lm) k += 1;
   const run = slab.runs[slab.runOf[k]];
-  if (run.ageIndex.length === 0) prepareRun(run);
+  if (run.ageIndex.length === 0) prepareRun(run); // a loaded run's first use
+  const i = slab.indexInRun[k];
+  const v = 1 - u;
   out.run = run;
-  out.i = slab.indexInRun[k];
-  out.b0 = out.i * run.n;
-  out.b1 = out.b0;
-  w[W_U] = 0;
-  w[W_C00] = 1;
-  w[W_C01] = 0;
-  w[W_C10] = 0;
-  w[W_C11] = 0;
+  out.i = i;
+  out.b0 = i * run.n;
+  out.b1 = hM > 0 ? out.b0 + run.n : out.b0;
+  w[W_U] = u;
+  w[W_C00] = (1 + 2 * u) * v * v;
+  w[W_C01] = u * u * (3 - 2 * u);
+  w[W_C10] = u * v * v * hM;
+  w[W_C11] = u * u * (u - 1) * hM;
+}
+
+/**
+ * The last track of `slab` whose log10 mass is ≤ `lm` (0 below the first; the last but one
+ * above the end): the mass index gives the last track at or below the bin's lower edge, then a
+ * step or two within the bin.
+ */
+function massCell(slab: GridSlab, lm: number): number {
+  const logM = slab.logM;
+  if (logM.length < 3) return 0;
+  let b = Math.floor((lm - slab.massIndexMin) * slab.massIndexScale);
+  if (b < 0) b = 0;
+  else if (b > MASS_BINS) b = MASS_BINS;
+  let k = slab.massIndex[b];
+  const last = logM.length - 2;
+  while (k < last && logM[k + 1] <= lm) k++;
+  return k;
 }
