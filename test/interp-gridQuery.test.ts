@@ -30,9 +30,9 @@ describe('createGridQuery(grid).star(initialMass, age, z)', () => {
     const k = 3;
     const j = Math.floor(run.n / 3);
     const m = 10 ** run.logM[k];
-    const a = 10 ** run.ages[2 * (k * run.n + j)];
-    const s = q.star(m, a, 0.014);
     const rec = (k * run.n + j) * REC_STRIDE;
+    const a = 10 ** run.rec[rec + REC.logAge];
+    const s = q.star(m, a, 0.014);
     // tolerance 1e-9 dex: log/exp round trips of mass and age only
     expect(Math.log10(s.luminosity)).toBeCloseTo(run.rec[rec + REC.logL], 9);
     expect(Math.log10(s.teff)).toBeCloseTo(run.rec[rec + REC.logTeff], 9);

@@ -1,9 +1,10 @@
 import type { Grid, GridRun, GridSlab } from '../tracks/grid.js';
-import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
+import { AGE_BIN_MIN, AGE_BIN_STEP, AGE_BINS, REC, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
 
 const INV_AGE_BIN_STEP = 1 / AGE_BIN_STEP;
 import { findInterval } from './bisect.js';
 import { exp10 } from './exp10.js';
+import { log10 } from './log10.js';
 import { createMassBlend, locateMass, type MassBlend, W_C00, W_C01, W_C10, W_C11, W_LA, W_LM, W_M, W_U } from './massBlend.js';
 import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
@@ -61,9 +62,6 @@ const LOG_TEFF_SUN = Math.log10(TEFF_SUN);
 /** log10 of GM☉/R☉² in cgs (IAU 2015 nominal values): log g = this + log M − 2 log R. */
 const LOGG_SUN = Math.log10((1.3271244e20 / 6.957e8 ** 2) * 100);
 const BLACK_HOLE = PHASE_INDEX['black-hole'];
-const INV_LN10 = 1 / Math.LN10;
-/** log10 through Math.log (agrees with Math.log10 to ~1e-16 absolute). */
-const log10 = (x: number) => Math.log(x) * INV_LN10;
 
 /** The hot loop's blend scratch: the star's coordinates and mass weights (see MassBlend). */
 const MB: MassBlend = createMassBlend();
@@ -127,18 +125,18 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
   const m = w[W_M];
   const la = w[W_LA];
   const n = run.n;
-  const A = run.ages;
-  // last j with age(j) <= la; A holds (log age, slope) pairs
-  const a0i = 2 * b0;
-  const a1i = 2 * b1;
+  // last j with age(j) <= la; the log age and its slope open each EEP's record (REC.logAge = 0)
+  const A = run.rec;
+  const a0i = REC_STRIDE * b0;
+  const a1i = REC_STRIDE * b1;
   let j: number;
   let phi: number;
   if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, w, n, hint)) >= 0) {
     // walkFrom found age(j) ≤ la, so the star is past the first EEP
-    const x0 = a0i + 2 * j;
-    const x1 = a1i + 2 * j;
+    const x0 = a0i + REC_STRIDE * j;
+    const x1 = a1i + REC_STRIDE * j;
     const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-    const ak = j < n - 1 ? c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3] : aj;
+    const ak = j < n - 1 ? c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1] : aj;
     phi = ak > aj ? (la - aj) / (ak - aj) : 0;
     if (phi > 1) phi = 1;
   } else {
@@ -162,8 +160,8 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
     } else {
       while (lo < hi) {
         const mid = (lo + hi + 1) >> 1;
-        const x0 = a0i + 2 * mid;
-        const x1 = a1i + 2 * mid;
+        const x0 = a0i + REC_STRIDE * mid;
+        const x1 = a1i + REC_STRIDE * mid;
         if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
         else hi = mid - 1;
       }
@@ -172,10 +170,10 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
         j = n - 1;
         phi = 0;
       } else {
-        const x0 = a0i + 2 * j;
-        const x1 = a1i + 2 * j;
+        const x0 = a0i + REC_STRIDE * j;
+        const x1 = a1i + REC_STRIDE * j;
         const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-        const ak = c00 * A[x0 + 2] + c10 * A[x0 + 3] + c01 * A[x1 + 2] + c11 * A[x1 + 3];
+        const ak = c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1];
         phi = ak > aj ? (la - aj) / (ak - aj) : 0;
         if (phi > 1) phi = 1;
       }
@@ -190,10 +188,11 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
   const psi = 1 - phi;
   const e0 = c00 * psi, e1 = c01 * psi, f0 = c10 * psi, f1 = c11 * psi;
   const g0 = c00 * phi, g1 = c01 * phi, h0 = c10 * phi, h1 = c11 * phi;
-  for (let c = 0; c < REC_STRIDE; c += 2) {
+  // mass, core mass, log L, log Teff (REC offsets 2, 4, 6, 8) into r[1] … r[4]
+  for (let c = REC.mass; c < REC_STRIDE; c += 2) {
     const x0 = q0 + c;
     const x1 = q1 + c;
-    r[1 + (c >> 1)] =
+    r[c >> 1] =
       e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
       g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
   }
@@ -220,13 +219,13 @@ function walkFrom(A: Float64Array, a0i: number, a1i: number, w: Float64Array, n:
   const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11];
   const la = w[W_LA];
   let j = hint;
-  let x0 = a0i + 2 * j;
-  let x1 = a1i + 2 * j;
+  let x0 = a0i + REC_STRIDE * j;
+  let x1 = a1i + REC_STRIDE * j;
   if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) {
     for (let s = 0; s < 6; s++) {
       if (j >= n - 1) return j;
-      x0 += 2;
-      x1 += 2;
+      x0 += REC_STRIDE;
+      x1 += REC_STRIDE;
       if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] > la) return j;
       j++;
     }
@@ -235,8 +234,8 @@ function walkFrom(A: Float64Array, a0i: number, a1i: number, w: Float64Array, n:
   for (let s = 0; s < 6; s++) {
     if (j <= 0) return -1;
     j--;
-    x0 -= 2;
-    x1 -= 2;
+    x0 -= REC_STRIDE;
+    x1 -= REC_STRIDE;
     if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) return j;
   }
   return -1;

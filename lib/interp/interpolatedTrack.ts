@@ -21,6 +21,9 @@ export interface InterpolatedTrack {
   remnantMass: number;
 }
 
+/** Record offsets of the four state columns kept per EEP (cols[j·4 + c]): mass, core mass, log L, log Teff. */
+const STATE_AT = [REC.mass, REC.coreMass, REC.logL, REC.logTeff];
+
 function slabTrack(slab: GridSlab, lm: number) {
   const mb = createMassBlend();
   mb.w[W_LM] = lm;
@@ -30,16 +33,13 @@ function slabTrack(slab: GridSlab, lm: number) {
   const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11], u = w[W_U];
   const n = run.n;
   const out = { n, logAge: new Float64Array(n), cols: new Float64Array(n * 4), phase: run.phase, layout: run.layout, msl: 0, rm: 0, remnant: run.remnant };
+  const D = run.rec;
+  const blend = (q0: number, q1: number) => c00 * D[q0] + c10 * D[q0 + 1] + c01 * D[q1] + c11 * D[q1 + 1];
   for (let j = 0; j < n; j++) {
-    const a0 = 2 * (b0 + j);
-    const a1 = 2 * (b1 + j);
-    out.logAge[j] = c00 * run.ages[a0] + c10 * run.ages[a0 + 1] + c01 * run.ages[a1] + c11 * run.ages[a1 + 1];
     const q0 = (b0 + j) * REC_STRIDE;
     const q1 = (b1 + j) * REC_STRIDE;
-    for (let c = 0; c < 4; c++) {
-      const o = 2 * c;
-      out.cols[j * 4 + c] = c00 * run.rec[q0 + o] + c10 * run.rec[q0 + o + 1] + c01 * run.rec[q1 + o] + c11 * run.rec[q1 + o + 1];
-    }
+    out.logAge[j] = blend(q0 + REC.logAge, q1 + REC.logAge);
+    for (let c = 0; c < 4; c++) out.cols[j * 4 + c] = blend(q0 + STATE_AT[c], q1 + STATE_AT[c]);
   }
   const t0 = mb.i;
   const t1 = u > 0 ? t0 + 1 : t0;
@@ -95,15 +95,15 @@ export function interpolatedTrack(grid: Grid, initialMass: number, z: number): I
     prev = Math.max(prev, a.logAge[j]);
     age[j] = 10 ** prev;
   }
-  const mass = col(REC.mass / 2);
-  const coreMass = col(REC.coreMass / 2);
+  const mass = col(0);
+  const coreMass = col(1);
   for (let j = 0; j < n; j++) {
     mass[j] *= initialMass; // stored as fractions of the initial mass
     coreMass[j] *= initialMass;
     if (coreMass[j] > mass[j]) coreMass[j] = mass[j];
   }
   return {
-    initialMass, z, n, age, mass, coreMass, logL: col(REC.logL / 2), logTeff: col(REC.logTeff / 2), phase: a.phase.slice(),
+    initialMass, z, n, age, mass, coreMass, logL: col(2), logTeff: col(3), phase: a.phase.slice(),
     msLifetime: a.msl === 0 ? 0 : 10 ** a.msl, remnant: REMNANT_CODES[a.remnant], remnantMass: a.rm,
   };
 }

@@ -1,6 +1,7 @@
 import type { Grid, GridRun } from '../tracks/grid.js';
 import { findInterval } from './bisect.js';
 import { exp10 } from './exp10.js';
+import { log10 } from './log10.js';
 import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LA, W_LM, W_M, W_U } from './massBlend.js';
 import { blendRun, writeStateRow, allocateStateColumns, type StateColumns } from './gridQuery.js';
 import { MAX_AGE } from '../model/limits.js';
@@ -18,7 +19,6 @@ export interface PopulationEvaluator {
   evaluate(age: ArrayLike<number>, out?: StateColumns): StateColumns;
 }
 
-const INV_LN10 = 1 / Math.LN10;
 
 /**
  * Precompute, then evaluate: for a population whose stars keep their birth mass and
@@ -129,7 +129,7 @@ export function createPopulationEvaluator(
           continue;
         }
         o.status[s] = 0;
-        mw[W_LA] = Math.log(a) * INV_LN10;
+        mw[W_LA] = log10(a);
         mw[W_M] = mass[s];
         side(2 * s, R0);
         const w = zw[s];

@@ -6,18 +6,18 @@ import { steffenSlopes } from '../interp/monotoneCubic.js';
 export const REMNANT_CODES: readonly RemnantKind[] = ['white-dwarf', 'neutron-star', 'black-hole', 'brown-dwarf'];
 
 /** Values per EEP in {@link GridRun.rec}: each column followed by its slope in log M. */
-export const REC_STRIDE = 8;
+export const REC_STRIDE = 10;
 /** Offsets inside one EEP record of {@link GridRun.rec}. */
-export const REC = { mass: 0, coreMass: 2, logL: 4, logTeff: 6 } as const;
+export const REC = { logAge: 0, mass: 2, coreMass: 4, logL: 6, logTeff: 8 } as const;
 
 /**
  * A run of tracks of one metallicity that share an EEP layout and are adjacent in mass:
  * present mass and core mass are stored as fractions of the track's initial mass.
- * the unit the interpolator blends within. The hot loop decides the memory layout: `ages`
- * holds (log age, its slope) pairs per EEP, track-major, for the age bisection; `rec` holds
- * one record of REC_STRIDE numbers per EEP — mass, core mass, log L, log Teff, each followed
- * by its Steffen slope with respect to log10 initial mass — so one blend reads two adjacent
- * records per track instead of eight scattered columns (measured in bench/: see README).
+ * the unit the interpolator blends within. The hot loop decides the memory layout: `rec`
+ * holds one record of REC_STRIDE numbers per EEP, track-major — log age, mass, core mass,
+ * log L, log Teff, each followed by its Steffen slope with respect to log10 initial mass — so
+ * the age search and the blend that follows read the same two adjacent records per track
+ * instead of ten scattered columns (measured in bench/: see README).
  */
 export interface GridRun {
   layout: string;
@@ -33,8 +33,6 @@ export interface GridRun {
    * `values[(c·count + k)·n + j]` (masses as fractions of the initial mass)
    */
   values: Float64Array;
-  /** [(track·n + eep)·2] = log10 age/yr, [+1] = its slope (empty until prepareRun) */
-  ages: Float64Array;
   /** [(track·n + eep)·REC_STRIDE + REC.x] = column x, [+1] = its slope (empty until prepareRun) */
   rec: Float64Array;
   /**
@@ -60,13 +58,13 @@ export const AGE_BINS = 1051;
  * nodes, an interpolated star's EEP for a log age in bin b lies between the smaller of its two
  * tracks' entries at b and the larger at b + 1 — the age search then bisects only that span.
  */
-export function indexRunAges(ages: Float64Array, n: number, count: number): Int16Array {
+export function indexRunAges(rec: Float64Array, n: number, count: number): Int16Array {
   const idx = new Int16Array(count * AGE_BINS);
   for (let k = 0; k < count; k++) {
     let j = 0;
     for (let b = 0; b < AGE_BINS; b++) {
       const edge = AGE_BIN_MIN + b * AGE_BIN_STEP;
-      while (j + 1 < n && ages[2 * (k * n + j + 1)] <= edge) j++;
+      while (j + 1 < n && rec[(k * n + j + 1) * REC_STRIDE + REC.logAge] <= edge) j++;
       idx[k * AGE_BINS + b] = j;
     }
   }
@@ -217,7 +215,6 @@ function buildRun(members: EepTrack[]): GridRun {
     phase: members[0].phase.slice(),
     logM,
     values,
-    ages: new Float64Array(0),
     rec: new Float64Array(0),
     ageIndex: new Int16Array(0),
     logMsLifetime: Float64Array.from(members.map((t) => (t.msLifetime > 0 ? Math.log10(t.msLifetime) : 0))),
@@ -233,8 +230,8 @@ export const VALUE_COLUMNS = ['logAge', 'mass', 'coreMass', 'logL', 'logTeff'] a
 
 /**
  * Makes a run ready for interpolation from its stored values: the Steffen slopes of every
- * column across the run's masses (runSlopes), interleaved with the values into `ages` and
- * `rec` in the layout the hot loop reads, and the age index (indexRunAges). The grid cache
+ * column across the run's masses (runSlopes), interleaved with the values into `rec` in the
+ * layout the hot loop reads, and the age index (indexRunAges). The grid cache
  * stores values only, so a loaded run is prepared on its first use (locateMass calls this),
  * and loading stays a file read. Does nothing for a prepared run.
  */
@@ -242,21 +239,19 @@ export function prepareRun(run: GridRun): void {
   if (run.ageIndex.length !== 0) return;
   const { n, count, logM, values } = run;
   const cn = count * n;
-  const ages = new Float64Array(cn * 2);
   const rec = new Float64Array(cn * REC_STRIDE);
   const slope = new Float64Array(cn);
   VALUE_COLUMNS.forEach((c, ci) => {
     const value = values.subarray(ci * cn, (ci + 1) * cn);
     runSlopes(logM, n, value, slope);
-    const [dst, stride, off] = c === 'logAge' ? [ages, 2, 0] : [rec, REC_STRIDE, REC[c]];
+    const off = REC[c];
     for (let p = 0; p < cn; p++) {
-      dst[p * stride + off] = value[p];
-      dst[p * stride + off + 1] = slope[p];
+      rec[p * REC_STRIDE + off] = value[p];
+      rec[p * REC_STRIDE + off + 1] = slope[p];
     }
   });
-  run.ages = ages;
   run.rec = rec;
-  run.ageIndex = indexRunAges(ages, n, count);
+  run.ageIndex = indexRunAges(rec, n, count);
 }
 
 /**

@@ -87,7 +87,7 @@ export function deserializeGrid(bytes: Uint8Array): Grid {
       const run: GridRun = {
         layout: hr.layout, n: hr.n, count: hr.count, remnant: hr.remnant,
         logM: f(hr.count), values: f(VALUE_COLUMNS.length * cn),
-        ages: new Float64Array(0), rec: new Float64Array(0), ageIndex: new Int16Array(0),
+        rec: new Float64Array(0), ageIndex: new Int16Array(0),
         logMsLifetime: f(hr.count), remnantMass: f(hr.count),
         phase: new Uint8Array(bytes.buffer, off, hr.n),
       };
