@@ -206,7 +206,8 @@ function childMs(script: string): number {
 
 /**
  * Time from nothing to a ready built-in grid: in a fresh child process, importing
- * loadBuiltinGrid and calling it once (read the 27 MB cache, typed-array views), measured
+ * loadBuiltinGrid and calling it once (open the cache: its header and each slab's track masses;
+ * runs are read on first use), measured
  * inside the child as performance.now() (ms since the process started) minus the same figure
  * of a bare child that imports nothing — so node's own start-up is taken out. Baseline: a child
  * that only reads the cache file's bytes (readFileSync), minus the bare child — the floor for

@@ -6,7 +6,7 @@ import { accuracySample } from '../lib/interp/accuracySample.js';
 import { monotoneCubic } from '../lib/interp/monotoneCubic.js';
 import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LM } from '../lib/interp/massBlend.js';
 import { prepareRun, REC, REC_STRIDE, type Grid } from '../lib/tracks/grid.js';
-import { serializeGrid, deserializeGrid } from '../lib/tracks/gridCache.js';
+import { serializeGrid, deserializeGrid, openGridCache } from '../lib/tracks/gridCache.js';
 import { PHASE_INDEX } from '../lib/model/phases.js';
 
 let grid: Grid;
@@ -175,6 +175,28 @@ describe('serializeGrid / deserializeGrid', () => {
     const again = createGridQuery(deserializeGrid(serializeGrid(grid)));
     for (const [m, a] of [[0.5, 1e10], [1, 4.6e9], [3, 3e8], [20, 8e6]]) {
       expect(again.star(m, a, 0.01)).toEqual(q.star(m, a, 0.01));
+    }
+  });
+
+  test('openGridCache reads the header and track masses at once, each run only when first asked', () => {
+    const bytes = serializeGrid(grid);
+    let read = 0;
+    const lazy = openGridCache((position, length) => {
+      read += length;
+      return bytes.subarray(position, position + length);
+    });
+    const opened = read;
+    // the header and 11 slabs' masses: a few per cent of the cache
+    expect(opened).toBeLessThan(0.05 * bytes.length);
+    const lq = createGridQuery(lazy);
+    expect(lq.star(1, 4.6e9, 0.014)).toEqual(q.star(1, 4.6e9, 0.014));
+    // one star at one metallicity node loads one run of one slab
+    const loaded = lazy.slabs.flatMap((s) => s.runs).filter((r) => r.load === null).length;
+    expect(loaded).toBe(1);
+    expect(read - opened).toBeLessThan(0.05 * bytes.length);
+    // and answers everywhere as the built grid does
+    for (const [m, a, z] of [[0.3, 1e10, 0.0002], [2.5, 1e9, 0.004], [40, 5e6, 0.03]]) {
+      expect(lq.star(m, a, z)).toEqual(q.star(m, a, z));
     }
   });
 });

@@ -45,6 +45,11 @@ export interface GridRun {
   logMsLifetime: Float64Array;
   remnantMass: Float64Array;
   remnant: number;
+  /**
+   * Reads the run's stored arrays (phase, logM, values, logMsLifetime, remnantMass) when the
+   * grid was opened from its cache without them (openGridCache); null once they are in.
+   */
+  load: (() => void) | null;
 }
 
 /** Age bins of {@link GridRun.ageIndex}: log10 age/yr from 2 to 12.5 in steps of 0.01 dex. */
@@ -84,12 +89,24 @@ export function indexSlabMasses(logM: Float64Array): { massIndex: Int32Array; ma
   const lo = logM[0];
   const scale = n > 1 ? MASS_BINS / (logM[n - 1] - lo) : 0;
   const massIndex = new Int32Array(MASS_BINS + 1);
-  let k = 0;
-  for (let b = 0; b <= MASS_BINS; b++) {
-    const edge = lo + b / scale;
-    while (k + 1 < n - 1 && logM[k + 1] <= edge) k++;
-    massIndex[b] = k;
+  // track k (at most n − 2) holds the bins from the first whose lower edge reaches logM[k] up
+  // to the next track's first: one fill per track, so a freshly loaded grid indexes its slabs
+  // in a fraction of a millisecond, even before the JIT has warmed up
+  const edge = (b: number) => lo + b / scale;
+  const firstBin = (k: number) => {
+    let b = Math.max(0, Math.min(MASS_BINS + 1, Math.ceil((logM[k] - lo) * scale)));
+    while (b > 0 && edge(b - 1) >= logM[k]) b--;
+    while (b <= MASS_BINS && edge(b) < logM[k]) b++;
+    return b;
+  };
+  const last = Math.max(0, n - 2);
+  let from = 0;
+  for (let k = 0; k < last; k++) {
+    const to = firstBin(k + 1);
+    if (to > from) massIndex.fill(k, from, to);
+    from = Math.max(from, to);
   }
+  massIndex.fill(last, from);
   return { massIndex, massIndexMin: lo, massIndexScale: scale };
 }
 
@@ -220,9 +237,18 @@ function buildRun(members: EepTrack[]): GridRun {
     logMsLifetime: Float64Array.from(members.map((t) => (t.msLifetime > 0 ? Math.log10(t.msLifetime) : 0))),
     remnantMass: Float64Array.from(members.map((t) => t.remnantMass)),
     remnant: REMNANT_CODES.indexOf(members[0].remnant),
+    load: null,
   };
   prepareRun(run);
   return run;
+}
+
+/** Makes sure a run's stored arrays are in memory (GridRun.load). */
+export function loadRun(run: GridRun): void {
+  const load = run.load;
+  if (load === null) return;
+  load();
+  run.load = null;
 }
 
 /** The columns a run stores, in the order of {@link GridRun.values}. */
@@ -237,6 +263,7 @@ export const VALUE_COLUMNS = ['logAge', 'mass', 'coreMass', 'logL', 'logTeff'] a
  */
 export function prepareRun(run: GridRun): void {
   if (run.ageIndex.length !== 0) return;
+  loadRun(run);
   const { n, count, logM, values } = run;
   const cn = count * n;
   const rec = new Float64Array(cn * REC_STRIDE);

@@ -1,4 +1,4 @@
-import { gridOfSlabs, indexSlabMasses, VALUE_COLUMNS, type Grid, type GridRun, type GridSlab } from './grid.js';
+import { gridOfSlabs, indexSlabMasses, loadRun, VALUE_COLUMNS, type Grid, type GridRun, type GridSlab } from './grid.js';
 
 const MAGIC = 'starclock-grid-cache 2';
 const RUN_F64 = ['logM', 'values', 'logMsLifetime', 'remnantMass'] as const;
@@ -46,6 +46,7 @@ export function serializeGrid(grid: Grid): Uint8Array {
   for (const s of grid.slabs) {
     put(s.logM);
     for (const r of s.runs) {
+      loadRun(r);
       for (const k of RUN_F64) put(r[k]);
       out.set(r.phase, off);
       off += Math.ceil(r.n / 8) * 8;
@@ -55,44 +56,72 @@ export function serializeGrid(grid: Grid): Uint8Array {
 }
 
 /**
+ * Reads `length` bytes at byte `position` of a grid cache: a new array, or a view whose offset
+ * in its buffer is a multiple of 8 (Float64 views are made on it).
+ */
+export type CacheReader = (position: number, length: number) => Uint8Array;
+
+/**
  * Reads a grid written by {@link serializeGrid}. The buffer must start at an 8-byte aligned
  * offset of its ArrayBuffer (a whole file read is).
  * @throws RangeError if the buffer is not a grid cache of this version
  */
 export function deserializeGrid(bytes: Uint8Array): Grid {
-  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  const len = view.getUint32(0, true);
+  if (bytes.byteOffset % 8 !== 0) bytes = bytes.slice();
+  const b = bytes;
+  return openGridCache((position, length) => {
+    if (position + length > b.length) throw new RangeError('grid cache: truncated');
+    return b.subarray(position, position + length);
+  });
+}
+
+/**
+ * A grid over a cache written by {@link serializeGrid}, read through `read`: the header and each
+ * slab's track masses now, each run's values only on its first use (GridRun.load, called by
+ * prepareRun) — so a grid is ready after a few small reads, and a program that asks about one
+ * metallicity reads little more than that slab.
+ * @throws RangeError if the bytes are not a grid cache of this version
+ */
+export function openGridCache(read: CacheReader): Grid {
+  const len = new DataView(read(0, 8).slice().buffer).getUint32(0, true);
   let header: Header;
   try {
-    header = JSON.parse(new TextDecoder().decode(bytes.subarray(8, 8 + len))) as Header;
+    header = JSON.parse(new TextDecoder().decode(read(8, len))) as Header;
   } catch {
     throw new RangeError('grid cache: unreadable header');
   }
   if (header.magic !== MAGIC) throw new RangeError(`grid cache: expected "${MAGIC}", found "${header.magic}"`);
-  if (bytes.byteOffset % 8 !== 0) bytes = bytes.slice();
-  let off = bytes.byteOffset + 8 + Math.ceil(len / 8) * 8;
-  const take = (n: number) => {
-    const a = new Float64Array(bytes.buffer, off, n);
-    off += n * 8;
-    return a;
-  };
+  let off = 8 + Math.ceil(len / 8) * 8;
   const slabs: GridSlab[] = header.slabs.map((hs) => {
-    const logM = take(hs.tracks);
+    const logM = new Float64Array(read(off, hs.tracks * 8).slice().buffer);
+    off += hs.tracks * 8;
     const runOf = new Int32Array(hs.tracks);
     const indexInRun = new Int32Array(hs.tracks);
     let t = 0;
     const runs: GridRun[] = hs.runs.map((hr, ri) => {
-      const f = (n: number) => take(n);
       const cn = hr.count * hr.n;
+      const start = off;
+      const f64 = hr.count + VALUE_COLUMNS.length * cn + 2 * hr.count;
+      off += 8 * f64 + Math.ceil(hr.n / 8) * 8;
       const run: GridRun = {
-        layout: hr.layout, n: hr.n, count: hr.count, remnant: hr.remnant,
-        logM: f(hr.count), values: f(VALUE_COLUMNS.length * cn),
-        rec: new Float64Array(0), ageIndex: new Int16Array(0),
-        logMsLifetime: f(hr.count), remnantMass: f(hr.count),
-        phase: new Uint8Array(bytes.buffer, off, hr.n),
+        layout: hr.layout, n: hr.n, count: hr.count, phase: new Uint8Array(0),
+        logM: new Float64Array(0), values: new Float64Array(0), rec: new Float64Array(0), ageIndex: new Int16Array(0),
+        logMsLifetime: new Float64Array(0), remnantMass: new Float64Array(0), remnant: hr.remnant,
+        load: () => {
+          const block = read(start, 8 * f64 + hr.n);
+          let p = block.byteOffset;
+          const take = (n: number) => {
+            const a = new Float64Array(block.buffer, p, n);
+            p += n * 8;
+            return a;
+          };
+          run.logM = take(hr.count);
+          run.values = take(VALUE_COLUMNS.length * cn);
+          run.logMsLifetime = take(hr.count);
+          run.remnantMass = take(hr.count);
+          run.phase = new Uint8Array(block.buffer, p, hr.n);
+        },
       };
-      off += Math.ceil(hr.n / 8) * 8;
-      // the age index is built on a run's first use (GridRun.ageIndex), so loading stays a read
       for (let k = 0; k < hr.count; k++, t++) {
         runOf[t] = ri;
         indexInRun[t] = k;
