@@ -210,8 +210,8 @@ function childMs(script: string): number {
  * runs are read on first use), measured
  * inside the child as performance.now() (ms since the process started) minus the same figure
  * of a bare child that imports nothing — so node's own start-up is taken out. Baseline: a child
- * that only reads the cache file's bytes (readFileSync), minus the bare child — the floor for
- * any loader of that file. Medians of `runs`, interleaved so all three see the same load.
+ * that only reads the whole cache file (readFileSync), minus the bare child — what a loader that
+ * reads everything up front would cost at least (this one defers the runs to their first use). Medians of `runs`, interleaved so all three see the same load.
  */
 function benchGridReady(runs: number): Figure {
   const url = new URL('../lib/io/loadBuiltinGrid.js', import.meta.url).href;
