@@ -14,8 +14,8 @@ interface Header {
 /**
  * Serialises a grid into one byte buffer: a JSON header, padded to 8 bytes, then each run's
  * stored values (not the slopes, which prepareRun derives on a run's first use) as Float64
- * columns in a fixed order. Loading it back (deserializeGrid) makes typed-array views with no
- * copying, so a grid is ready in the time it takes to read the file.
+ * columns in a fixed order. Reading it back (deserializeGrid over bytes in memory, openGridCache
+ * through a reader of a file) makes typed-array views, each run's on its first use.
  */
 export function serializeGrid(grid: Grid): Uint8Array {
   const header: Header = {
