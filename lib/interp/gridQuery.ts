@@ -67,32 +67,27 @@ const BLACK_HOLE = PHASE_INDEX['black-hole'];
 const MB: MassBlend = createMassBlend();
 const MW = MB.w;
 /**
- * Where the star's z falls among the grid's metallicities (set by locateZ): ZK[0] the lower
+ * Where the star's z falls among the grid's metallicities (locateZ): ZK[0] the lower
  * slab, ZW[0] the weight of the upper one (0: the lower slab alone). Typed slots, not
  * arguments: see MassBlend.
  */
 const ZK = new Int32Array(1);
 const ZW = new Float64Array(1);
 
-/** Sets ZK, ZW for log10 z `lz` (one slab: 0, 0; at or past a node: that node alone). */
-function locateZ(grid: Grid, lz: number): void {
+/**
+ * Where log10 z `lz` falls among the grid's metallicities, into `k[at]` (the lower slab) and
+ * `w[at]` (the weight of the upper one; 0: slab k alone — one slab, or at or past a node).
+ */
+export function locateZ(grid: Grid, lz: number, k: Int32Array, w: Float64Array, at: number): void {
   if (grid.slabs.length === 1) {
-    ZK[0] = 0;
-    ZW[0] = 0;
+    k[at] = 0;
+    w[at] = 0;
     return;
   }
-  const k = findInterval(grid.logZ, lz);
-  const w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
-  ZK[0] = w >= 1 ? k + 1 : k;
-  ZW[0] = w > 0 && w < 1 ? w : 0;
-}
-
-/**
- * Evaluates one metallicity slab at the star in MB (log10 mass, mass, log10 age) into `r`.
- * Mass: see locateMass. Age: see blendRun.
- */
-function evalSlab(slab: GridSlab, r: Float64Array): void {
-  blendAt(slab, MB, -1, r);
+  const lo = findInterval(grid.logZ, lz);
+  const f = (lz - grid.logZ[lo]) / (grid.logZ[lo + 1] - grid.logZ[lo]);
+  k[at] = f >= 1 ? lo + 1 : lo;
+  w[at] = f > 0 && f < 1 ? f : 0;
 }
 
 /**
@@ -129,17 +124,11 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
   const A = run.rec;
   const a0i = REC_STRIDE * b0;
   const a1i = REC_STRIDE * b1;
-  let j: number;
-  let phi: number;
-  if (hint >= 0 && hint < n - 1 && (j = walkFrom(A, a0i, a1i, w, n, hint)) >= 0) {
-    // walkFrom found age(j) ≤ la, so the star is past the first EEP
-    const x0 = a0i + REC_STRIDE * j;
-    const x1 = a1i + REC_STRIDE * j;
-    const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-    const ak = j < n - 1 ? c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1] : aj;
-    phi = ak > aj ? (la - aj) / (ak - aj) : 0;
-    if (phi > 1) phi = 1;
-  } else {
+  // j: the last EEP whose blended log age is ≤ la — from the hint when it is near (walkFrom,
+  // −1 when not), else searched; `young`: the star is younger than the first EEP
+  let j = hint >= 0 && hint < n - 1 ? walkFrom(A, a0i, a1i, w, n, hint) : -1;
+  let young = false;
+  if (j < 0) {
     // narrow the search with the run's age index (see indexRunAges), then bisect
     let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
     const below = !(bin >= 0); // younger than the index's first edge (or age 0: la = −∞)
@@ -154,10 +143,8 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
     // when the index puts both tracks past their first EEP at the bin's lower edge (≤ la),
     // the blended first EEP is too (the monotone cubic stays between its nodes): only
     // otherwise is the star's age compared with the first EEP's, to catch the youngest
-    if (lo === 0 && !(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) {
-      j = 0;
-      phi = 0;
-    } else {
+    if (lo === 0 && !(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) young = true;
+    else {
       while (lo < hi) {
         const mid = (lo + hi + 1) >> 1;
         const x0 = a0i + REC_STRIDE * mid;
@@ -165,19 +152,18 @@ function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64A
         if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
         else hi = mid - 1;
       }
-      j = lo;
-      if (j >= n - 1) {
-        j = n - 1;
-        phi = 0;
-      } else {
-        const x0 = a0i + REC_STRIDE * j;
-        const x1 = a1i + REC_STRIDE * j;
-        const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-        const ak = c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1];
-        phi = ak > aj ? (la - aj) / (ak - aj) : 0;
-        if (phi > 1) phi = 1;
-      }
     }
+    j = lo;
+  }
+  // the fraction of the way in log age to the next EEP (0 at the first and the last)
+  let phi = 0;
+  if (!young && j < n - 1) {
+    const x0 = a0i + REC_STRIDE * j;
+    const x1 = a1i + REC_STRIDE * j;
+    const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
+    const ak = c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1];
+    phi = ak > aj ? (la - aj) / (ak - aj) : 0;
+    if (phi > 1) phi = 1;
   }
   r[0] = run.phase[j];
   const D = run.rec;
@@ -250,16 +236,32 @@ function evalGrid(grid: Grid): void {
   const slabs = grid.slabs;
   const k = ZK[0];
   const w = ZW[0];
-  evalSlab(slabs[k], R0);
+  blendAt(slabs[k], MB, -1, R0);
   if (w === 0) return;
-  evalSlab(slabs[k + 1], R1);
-  if (R0[0] !== R1[0] || R0[7] !== R1[7]) {
-    if (w >= 0.5) R0.set(R1);
+  blendAt(slabs[k + 1], MB, -1, R1);
+  mixSlabs(R0, R1, w);
+}
+
+/**
+ * Blends the results of the two slabs bracketing a star's log Z, `r0` (lower) and `r1`
+ * (upper, weight `w`), into `r0`: linearly when they agree on the phase and the remnant, else
+ * the nearer slab's answer whole — a star is never half in one phase and half in another.
+ */
+export function mixSlabs(r0: Float64Array, r1: Float64Array, w: number): void {
+  if (r0[0] !== r1[0] || r0[7] !== r1[7]) {
+    if (w >= 0.5) r0.set(r1);
     return;
   }
   const v = 1 - w;
-  for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
-  if (R0[2] > R0[1]) R0[2] = R0[1];
+  for (let c = 1; c <= 6; c++) r0[c] = v * r0[c] + w * r1[c];
+  if (r0[2] > r0[1]) r0[2] = r0[1];
+}
+
+/** Row `s` of `o` for a star that cannot be computed: `status` (see StateColumns) and zeros. */
+export function clearStateRow(o: StateColumns, s: number, status: number): void {
+  o.status[s] = status;
+  o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
+  o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
 }
 
 /**
@@ -274,11 +276,9 @@ export function writeStateRow(o: StateColumns, s: number, r: Float64Array, w: Fl
   const mass = r[1];
   // a star that kept its birth mass has its log already (w: the star's MassBlend scratch)
   const logMass = mass === w[W_M] ? w[W_LM] : log10(mass);
-  const logR = 0.5 * r[3] - 2 * (r[4] - LOG_TEFF_SUN);
   o.phase[s] = ph;
   o.mass[s] = mass;
   o.coreMass[s] = r[2];
-  o.logg[s] = LOGG_SUN + logMass - 2 * logR;
   if (ph === BLACK_HOLE) {
     const rs = schwarzschildRadius(mass);
     o.luminosity[s] = 0;
@@ -286,6 +286,8 @@ export function writeStateRow(o: StateColumns, s: number, r: Float64Array, w: Fl
     o.radius[s] = rs;
     o.logg[s] = LOGG_SUN + logMass - 2 * log10(rs);
   } else {
+    const logR = 0.5 * r[3] - 2 * (r[4] - LOG_TEFF_SUN);
+    o.logg[s] = LOGG_SUN + logMass - 2 * logR;
     const L = exp10(r[3]);
     const T = exp10(r[4]);
     const f = TEFF_SUN / T;
@@ -326,7 +328,7 @@ export function createGridQuery(grid: Grid): GridQuery {
       MW[W_M] = initialMass;
       MW[W_LM] = Math.log10(initialMass);
       MW[W_LA] = Math.log10(age);
-      locateZ(grid, Math.log10(z));
+      locateZ(grid, Math.log10(z), ZK, ZW, 0);
       evalGrid(grid);
       return observeState(
         initialMass, z, age, R0[0], R0[1], R0[2], R0[3], R0[4],
@@ -342,7 +344,7 @@ export function createGridQuery(grid: Grid): GridQuery {
       if (o.mass.length < n) throw new RangeError(`columns: output holds ${o.mass.length} stars, need ${n}`);
       const zs = input.z;
       const zScalar = typeof zs === 'number';
-      if (zScalar) locateZ(grid, Math.log10(zs));
+      if (zScalar) locateZ(grid, Math.log10(zs), ZK, ZW, 0);
       const mMin = massRange.min;
       const mMax = massRange.max;
       const zMin = zRange.min;
@@ -355,16 +357,15 @@ export function createGridQuery(grid: Grid): GridQuery {
         if (!(m >= mMin && m <= mMax)) bad = 1;
         else if (!(z >= zMin && z <= zMax)) bad = 2;
         else if (!(age >= 0 && age <= MAX_AGE)) bad = 3;
-        o.status[s] = bad;
         if (bad) {
-          o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
-          o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
+          clearStateRow(o, s, bad);
           continue;
         }
+        o.status[s] = 0;
         MW[W_M] = m;
         MW[W_LM] = log10(m);
         MW[W_LA] = log10(age);
-        if (!zScalar) locateZ(grid, log10(z));
+        if (!zScalar) locateZ(grid, log10(z), ZK, ZW, 0);
         evalGrid(grid);
         writeStateRow(o, s, R0, MW);
       }

@@ -2,24 +2,14 @@ import type { Grid, GridSlab } from '../tracks/grid.js';
 import { REC, REC_STRIDE, REMNANT_CODES } from '../tracks/grid.js';
 import { findInterval } from './bisect.js';
 import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LM, W_U } from './massBlend.js';
-import type { RemnantKind } from '../model/phases.js';
+import type { Track } from '../tracks/track.js';
 
-/** A track interpolated from a grid at one initial mass and z, EEP by EEP. */
-export interface InterpolatedTrack {
-  initialMass: number;
-  z: number;
-  n: number;
-  /** yr */
-  age: Float64Array;
-  mass: Float64Array;
-  coreMass: Float64Array;
-  logL: Float64Array;
-  logTeff: Float64Array;
-  phase: Uint8Array;
-  msLifetime: number;
-  remnant: RemnantKind;
-  remnantMass: number;
-}
+/**
+ * A track interpolated from a grid at one initial mass and z, EEP by EEP: the columns of a
+ * model Track (ages in yr), without its EEP marks and events (`track` prints the EEPs from
+ * interpolatedTrackEeps).
+ */
+export type InterpolatedTrack = Omit<Track, 'eeps' | 'events'>;
 
 /** Record offsets of the four state columns kept per EEP (cols[j·4 + c]): mass, core mass, log L, log Teff. */
 const STATE_AT = [REC.mass, REC.coreMass, REC.logL, REC.logTeff];

@@ -1,9 +1,8 @@
 import type { Grid, GridRun } from '../tracks/grid.js';
-import { findInterval } from './bisect.js';
 import { exp10 } from './exp10.js';
 import { log10 } from './log10.js';
 import { createMassBlend, locateMass, W_C00, W_C01, W_C10, W_C11, W_LA, W_LM, W_M, W_U } from './massBlend.js';
-import { blendRun, writeStateRow, allocateStateColumns, type StateColumns } from './gridQuery.js';
+import { blendRun, clearStateRow, locateZ, mixSlabs, writeStateRow, allocateStateColumns, type StateColumns } from './gridQuery.js';
 import { MAX_AGE } from '../model/limits.js';
 import { PHASE_INDEX } from '../model/phases.js';
 
@@ -55,10 +54,11 @@ export function createPopulationEvaluator(
   };
   // per star and side (0: lower slab, 1: upper slab): run id, b0, b1, i and the weights
   const rid = new Int32Array(2 * n);
-  const base = new Int32Array(4 * n); // b0, b1 per side
-  const track = new Float64Array(4 * n); // i, u per side
+  const base = new Int32Array(6 * n); // b0, b1, i per side
+  const frac = new Float64Array(2 * n); // u per side
   const wts = new Float64Array(8 * n); // c00, c01, c10, c11 per side
   const hint = new Int32Array(2 * n).fill(-1);
+  const slab = new Int32Array(n); // the lower slab
   const zw = new Float64Array(n); // weight of the upper slab (0: lower only)
   const mass = Float64Array.from(initialMass);
   const logMass = mass.map(Math.log10);
@@ -70,28 +70,16 @@ export function createPopulationEvaluator(
     const zs = typeof z === 'number' ? z : z[s];
     if (!(m >= massRange.min && m <= massRange.max)) throw new RangeError(`star ${s}: initialMass ${m} outside the ${source} grid's ${massRange.min}–${massRange.max} Msun`);
     if (!(zs >= zRange.min && zs <= zRange.max)) throw new RangeError(`star ${s}: z ${zs} outside the ${source} grid's ${zRange.min}–${zRange.max}`);
-    let k = 0;
-    let w = 0;
-    if (grid.slabs.length > 1) {
-      const lz = Math.log10(zs);
-      k = findInterval(grid.logZ, lz);
-      w = (lz - grid.logZ[k]) / (grid.logZ[k + 1] - grid.logZ[k]);
-      if (w <= 0) w = 0;
-      else if (w >= 1) {
-        k += 1;
-        w = 0;
-      }
-    }
-    zw[s] = w;
-    mw[W_LM] = Math.log10(m);
-    for (let side = 0; side < (w > 0 ? 2 : 1); side++) {
-      locateMass(grid.slabs[k + side], mb);
+    locateZ(grid, Math.log10(zs), slab, zw, s);
+    mw[W_LM] = logMass[s];
+    for (let side = 0; side < (zw[s] > 0 ? 2 : 1); side++) {
+      locateMass(grid.slabs[slab[s] + side], mb);
       const p = 2 * s + side;
       rid[p] = idOf(mb.run);
-      base[2 * p] = mb.b0;
-      base[2 * p + 1] = mb.b1;
-      track[2 * p] = mb.i;
-      track[2 * p + 1] = mw[W_U];
+      base[3 * p] = mb.b0;
+      base[3 * p + 1] = mb.b1;
+      base[3 * p + 2] = mb.i;
+      frac[p] = mw[W_U];
       wts[4 * p] = mw[W_C00];
       wts[4 * p + 1] = mw[W_C01];
       wts[4 * p + 2] = mw[W_C10];
@@ -104,10 +92,10 @@ export function createPopulationEvaluator(
   // the typed scratch, not arguments: see MassBlend)
   const side = (p: number, r: Float64Array) => {
     mb.run = runs[rid[p]];
-    mb.b0 = base[2 * p];
-    mb.b1 = base[2 * p + 1];
-    mb.i = track[2 * p] | 0; // an integer, kept a small integer in the shared MassBlend shape
-    mw[W_U] = track[2 * p + 1];
+    mb.b0 = base[3 * p];
+    mb.b1 = base[3 * p + 1];
+    mb.i = base[3 * p + 2];
+    mw[W_U] = frac[p];
     mw[W_C00] = wts[4 * p];
     mw[W_C01] = wts[4 * p + 1];
     mw[W_C10] = wts[4 * p + 2];
@@ -123,9 +111,7 @@ export function createPopulationEvaluator(
       for (let s = 0; s < n; s++) {
         const a = age[s];
         if (!(a >= 0 && a <= MAX_AGE)) {
-          o.status[s] = 3;
-          o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
-          o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
+          clearStateRow(o, s, 3);
           continue;
         }
         o.status[s] = 0;
@@ -135,11 +121,7 @@ export function createPopulationEvaluator(
         const w = zw[s];
         if (w > 0) {
           side(2 * s + 1, R1);
-          if (R0[0] === R1[0] && R0[7] === R1[7]) {
-            const v = 1 - w;
-            for (let c = 1; c <= 6; c++) R0[c] = v * R0[c] + w * R1[c];
-            if (R0[2] > R0[1]) R0[2] = R0[1];
-          } else if (w >= 0.5) R0.set(R1);
+          mixSlabs(R0, R1, w);
         }
         if (hrOnly) {
           o.phase[s] = R0[0];

@@ -1,7 +1,6 @@
 import { hrDomainOf } from './hrDomainOf.js';
 import { FIGURE_LAYOUT, hrFrame } from './hrFrame.js';
-import { linePath } from './linePath.js';
-import { seriesStyle } from './seriesStyle.js';
+import { hrSeries } from './hrSeries.js';
 import { svgFigure } from './svgFigure.js';
 import { svgLegend, type LegendRow } from './svgLegend.js';
 import { svgNumber as n } from './svgNumber.js';
@@ -36,22 +35,14 @@ export function isochroneFigure(lines: readonly IsochroneLine[], text: FigureTex
   const marks: string[] = [];
   const rows: LegendRow[] = [];
   lines.forEach((line, i) => {
-    const { color, dash } = seriesStyle(i);
-    const count = line.logTeff.length;
-    const xs = new Float64Array(count);
-    const ys = new Float64Array(count);
-    for (let j = 0; j < count; j++) {
-      xs[j] = frame.x(line.logTeff[j]);
-      ys[j] = frame.y(line.logL[j]);
-    }
-    const dashAttr = dash === '' ? '' : ` stroke-dasharray="${dash}"`;
-    body.push(`<path class="isochrone" fill="none" stroke="${color}" stroke-width="1.6" stroke-linejoin="round"${dashAttr} d="${linePath(xs, ys, line.starts)}"/>`);
+    const { color, path, swatch } = hrSeries(frame, i, 'isochrone', line.logTeff, line.logL, line.starts);
+    body.push(path);
     if (line.turnoff !== null) {
       const x = frame.x(line.turnoff.logTeff);
       const y = frame.y(line.turnoff.logL);
       marks.push(`<circle class="turnoff" cx="${n(x)}" cy="${n(y)}" r="4" fill="none" stroke="${color}" stroke-width="1.6"/>`);
     }
-    rows.push({ swatch: `<path fill="none" stroke="${color}" stroke-width="2"${dashAttr} d="M0 6H24"/>`, label: line.label, value: line.value });
+    rows.push({ swatch, label: line.label, value: line.value });
   });
   if (lines.some((l) => l.turnoff !== null)) {
     rows.push({ swatch: '', label: '' });

@@ -1,8 +1,7 @@
 import { eventMark, TRACK_EVENTS, type TrackEvent } from './eventMark.js';
 import { hrDomainOf } from './hrDomainOf.js';
 import { FIGURE_LAYOUT, hrFrame } from './hrFrame.js';
-import { linePath } from './linePath.js';
-import { seriesStyle } from './seriesStyle.js';
+import { hrSeries } from './hrSeries.js';
 import { svgFigure } from './svgFigure.js';
 import { svgLegend, type LegendRow } from './svgLegend.js';
 
@@ -43,22 +42,15 @@ export function trackFigure(tracks: readonly TrackLine[], text: FigureText): str
   const rows: LegendRow[] = [];
   const used = new Set<TrackEvent>();
   tracks.forEach((track, i) => {
-    const { color, dash } = seriesStyle(i);
-    const n = track.logTeff.length;
-    const xs = new Float64Array(n);
-    const ys = new Float64Array(n);
-    for (let j = 0; j < n; j++) {
-      xs[j] = frame.x(track.logTeff[j]);
-      ys[j] = frame.y(track.logL[j]);
-    }
-    const dashAttr = dash === '' ? '' : ` stroke-dasharray="${dash}"`;
-    body.push(`<path class="track" fill="none" stroke="${color}" stroke-width="1.6" stroke-linejoin="round"${dashAttr} d="${linePath(xs, ys, [])}"/>`);
+    const { color, xs, ys, path, swatch } = hrSeries(frame, i, 'track', track.logTeff, track.logL, []);
+    const n = xs.length;
+    body.push(path);
     for (const { event, index } of track.events) {
       if (index < 0 || index >= n) continue;
       used.add(event);
       marks.push(eventMark(event, xs[index], ys[index], color));
     }
-    rows.push({ swatch: `<path fill="none" stroke="${color}" stroke-width="2"${dashAttr} d="M0 6H24"/>`, label: track.label });
+    rows.push({ swatch, label: track.label });
   });
   const keys = TRACK_EVENTS.filter((e) => used.has(e.event));
   if (keys.length > 0) rows.push({ swatch: '', label: '' });

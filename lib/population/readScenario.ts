@@ -109,6 +109,44 @@ class Reader {
     if (value.length < minLength) return this.fail(path, value, `has ${value.length} entries, too few`, allowed);
     return value;
   }
+
+  /**
+   * An array of at least `minLength` pairs [x, y] with x strictly increasing; `first` and
+   * `second` read a pair's parts (path, value); `words` are the messages: `notPair` for an entry
+   * that is not a pair, `pair` what one is, `misplaced` for an x not above the previous one
+   * (followed by that one's path), `increasing` what is allowed. Every problem is collected;
+   * undefined if there is any.
+   */
+  increasingPairs(
+    path: string, value: unknown, minLength: number, allowed: string,
+    first: (path: string, v: unknown) => number | undefined, second: (path: string, v: unknown) => number | undefined,
+    words: { notPair: string; pair: string; misplaced: string; increasing: string },
+  ): [number, number][] | undefined {
+    const a = this.array(path, value, minLength, allowed);
+    if (!a) return undefined;
+    const points: [number, number][] = [];
+    let ok = true;
+    a.forEach((p, i) => {
+      const at = `${path}[${i}]`;
+      if (!Array.isArray(p) || p.length !== 2) {
+        this.fail(at, p, words.notPair, words.pair);
+        ok = false;
+        return;
+      }
+      const x = first(`${at}[0]`, p[0]);
+      const y = second(`${at}[1]`, p[1]);
+      if (x === undefined || y === undefined) {
+        ok = false;
+        return;
+      }
+      if (points.length === i && i > 0 && !(x > points[i - 1][0])) {
+        this.fail(`${at}[0]`, p[0], `${words.misplaced} ${path}[${i - 1}][0]`, words.increasing);
+        ok = false;
+      }
+      points.push([x, y]);
+    });
+    return ok ? points : undefined;
+  }
 }
 
 /** Key path of `key` inside `path`; top-level keys have no prefix. */
@@ -205,30 +243,13 @@ function readStarFormation(r: Reader, v: unknown, now: number | undefined): Star
     case 'table': {
       const allowed = 'an array of at least 2 [time, rate] pairs: times ages ≥ 0 strictly increasing, rates numbers ≥ 0';
       if (o.points === undefined) return r.missing('starFormation.points', allowed);
-      const a = r.array('starFormation.points', o.points, 2, allowed);
-      if (!a) return undefined;
-      const points: [number, number][] = [];
-      let ok = true;
-      a.forEach((p, i) => {
-        const path = `starFormation.points[${i}]`;
-        if (!Array.isArray(p) || p.length !== 2) {
-          r.fail(path, p, 'is not a [time, rate] pair', 'a pair [time, rate]');
-          ok = false;
-          return;
-        }
-        const t = r.age(`${path}[0]`, p[0], 0, MAX_AGE, 'a time 0–100 Gyr');
-        const rate = r.number(`${path}[1]`, p[1], 0, Number.MAX_VALUE, 'a rate ≥ 0 (any unit)');
-        if (t === undefined || rate === undefined) {
-          ok = false;
-          return;
-        }
-        if (points.length === i && i > 0 && !(t > points[i - 1][0])) {
-          r.fail(`${path}[0]`, p[0], `is not after starFormation.points[${i - 1}][0]`, 'strictly increasing times');
-          ok = false;
-        }
-        points.push([t, rate]);
-      });
-      if (!ok) return undefined;
+      const points = r.increasingPairs(
+        'starFormation.points', o.points, 2, allowed,
+        (path, v) => r.age(path, v, 0, MAX_AGE, 'a time 0–100 Gyr'),
+        (path, v) => r.number(path, v, 0, Number.MAX_VALUE, 'a rate ≥ 0 (any unit)'),
+        { notPair: 'is not a [time, rate] pair', pair: 'a pair [time, rate]', misplaced: 'is not after', increasing: 'strictly increasing times' },
+      );
+      if (!points) return undefined;
       if (now !== undefined && !formsStars(points, now)) {
         return r.fail('starFormation.points', o.points, `form no stars in [0, now] (now = ${now} yr)`, 'a positive rate somewhere between time 0 and now');
       }
@@ -275,30 +296,13 @@ function readMetallicity(r: Reader, v: unknown): MetallicitySpec | undefined {
     return spread === undefined ? { kind: 'fixed', z: clampZ(zFromFeh(feh)) } : { kind: 'spread', feh, spread };
   }
   const allowed = 'an array of at least one [age, feh] pair, ages ≥ 0 strictly increasing';
-  const a = r.array('metallicity.ageMetallicity', o.ageMetallicity, 1, allowed);
-  if (!a) return undefined;
-  const points: [number, number][] = [];
-  let ok = true;
-  a.forEach((p, i) => {
-    const path = `metallicity.ageMetallicity[${i}]`;
-    if (!Array.isArray(p) || p.length !== 2) {
-      r.fail(path, p, 'is not an [age, feh] pair', 'a pair [age, feh]');
-      ok = false;
-      return;
-    }
-    const age = r.age(`${path}[0]`, p[0], 0, MAX_AGE, 'an age 0–100 Gyr');
-    const feh = r.number(`${path}[1]`, p[1], FEH_MIN, FEH_MAX, fehAllowed);
-    if (age === undefined || feh === undefined) {
-      ok = false;
-      return;
-    }
-    if (points.length === i && i > 0 && !(age > points[i - 1][0])) {
-      r.fail(`${path}[0]`, p[0], `is not above metallicity.ageMetallicity[${i - 1}][0]`, 'strictly increasing ages');
-      ok = false;
-    }
-    points.push([age, feh]);
-  });
-  return ok ? { kind: 'ageMetallicity', points, spread: spread ?? 0 } : undefined;
+  const points = r.increasingPairs(
+    'metallicity.ageMetallicity', o.ageMetallicity, 1, allowed,
+    (path, v) => r.age(path, v, 0, MAX_AGE, 'an age 0–100 Gyr'),
+    (path, v) => r.number(path, v, FEH_MIN, FEH_MAX, fehAllowed),
+    { notPair: 'is not an [age, feh] pair', pair: 'a pair [age, feh]', misplaced: 'is not above', increasing: 'strictly increasing ages' },
+  );
+  return points ? { kind: 'ageMetallicity', points, spread: spread ?? 0 } : undefined;
 }
 
 /** zFromFeh at the range's own ends can round a hair outside it. */

@@ -3,6 +3,12 @@ import { gridOfSlabs, indexSlabMasses, loadRun, VALUE_COLUMNS, type Grid, type G
 const MAGIC = 'starclock-grid-cache 2';
 const RUN_F64 = ['logM', 'values', 'logMsLifetime', 'remnantMass'] as const;
 
+/** Lengths of a run's RUN_F64 arrays in the cache, in that order, for `count` tracks of `n` EEPs. */
+const runF64Lengths = (count: number, n: number): number[] => [count, VALUE_COLUMNS.length * count * n, count, count];
+/** Bytes of a run's block in the cache: its RUN_F64 arrays, then its phase codes padded to 8 bytes. */
+const runBlockBytes = (count: number, n: number): number =>
+  8 * runF64Lengths(count, n).reduce((a, b) => a + b, 0) + Math.ceil(n / 8) * 8;
+
 interface Header {
   magic: string;
   source: string;
@@ -30,9 +36,7 @@ export function serializeGrid(grid: Grid): Uint8Array {
   let bytes = headLen;
   for (const s of grid.slabs) {
     bytes += s.logM.length * 8;
-    for (const r of s.runs) {
-      bytes += 8 * (r.count + VALUE_COLUMNS.length * r.count * r.n + 2 * r.count) + Math.ceil(r.n / 8) * 8;
-    }
+    for (const r of s.runs) bytes += runBlockBytes(r.count, r.n);
   }
   const out = new Uint8Array(bytes);
   const view = new DataView(out.buffer);
@@ -99,26 +103,21 @@ export function openGridCache(read: CacheReader): Grid {
     const indexInRun = new Int32Array(hs.tracks);
     let t = 0;
     const runs: GridRun[] = hs.runs.map((hr, ri) => {
-      const cn = hr.count * hr.n;
       const start = off;
-      const f64 = hr.count + VALUE_COLUMNS.length * cn + 2 * hr.count;
-      off += 8 * f64 + Math.ceil(hr.n / 8) * 8;
+      const lengths = runF64Lengths(hr.count, hr.n);
+      const blockBytes = runBlockBytes(hr.count, hr.n);
+      off += blockBytes;
       const run: GridRun = {
         layout: hr.layout, n: hr.n, count: hr.count, phase: new Uint8Array(0),
         logM: new Float64Array(0), values: new Float64Array(0), rec: new Float64Array(0), ageIndex: new Int16Array(0),
         logMsLifetime: new Float64Array(0), remnantMass: new Float64Array(0), remnant: hr.remnant,
         load: () => {
-          const block = read(start, 8 * f64 + hr.n);
+          const block = read(start, blockBytes);
           let p = block.byteOffset;
-          const take = (n: number) => {
-            const a = new Float64Array(block.buffer, p, n);
-            p += n * 8;
-            return a;
-          };
-          run.logM = take(hr.count);
-          run.values = take(VALUE_COLUMNS.length * cn);
-          run.logMsLifetime = take(hr.count);
-          run.remnantMass = take(hr.count);
+          RUN_F64.forEach((key, i) => {
+            run[key] = new Float64Array(block.buffer, p, lengths[i]);
+            p += lengths[i] * 8;
+          });
           run.phase = new Uint8Array(block.buffer, p, hr.n);
         },
       };
