@@ -54,9 +54,6 @@ export function allocateStateColumns(n: number): StateColumns {
   };
 }
 
-// scratch result of one slab evaluation: phase, mass, coreMass, logL, logTeff, logMsLifetime, remnantMass, remnant
-const R0 = new Float64Array(8);
-const R1 = new Float64Array(8);
 const TEFF_SUN = 5772;
 const LOG_TEFF_SUN = Math.log10(TEFF_SUN);
 /** log10 of GM☉/R☉² in cgs (IAU 2015 nominal values): log g = this + log M − 2 log R. */
@@ -73,6 +70,12 @@ const MW = MB.w;
  */
 const ZK = new Int32Array(1);
 const ZW = new Float64Array(1);
+/**
+ * The last star's result, left by evaluateStars: [0, 8) the answer (phase, mass, core mass,
+ * log L, log Teff, log msLifetime, remnant mass, remnant code), [8, 16) the upper slab's
+ * before the two were mixed.
+ */
+const RES = new Float64Array(16);
 
 /**
  * Where log10 z `lz` falls among the grid's metallicities, into `k[at]` (the lower slab) and
@@ -85,116 +88,279 @@ export function locateZ(grid: Grid, lz: number, k: Int32Array, w: Float64Array, 
     return;
   }
   const lo = findInterval(grid.logZ, lz);
-  const f = (lz - grid.logZ[lo]) / (grid.logZ[lo + 1] - grid.logZ[lo]);
+  let f = (lz - grid.logZ[lo]) / (grid.logZ[lo + 1] - grid.logZ[lo]);
+  // a z at a node, its log rounded either way (a table log10, a log of a decimal), is the node:
+  // one slab answers instead of two blended with a weight of 1e-16
+  if (f < 1e-12) f = 0;
+  else if (f > 1 - 1e-12) f = 1;
   k[at] = f >= 1 ? lo + 1 : lo;
   w[at] = f > 0 && f < 1 ? f : 0;
 }
 
 /**
- * The state at log age `mb.w[W_LA]` of the star of initial mass `mb.w[W_M]` blended from a
- * run's tracks with the Hermite weights in `mb` (see locateMass), into `r` (phase, mass, core
- * mass, log L, log Teff, log msLifetime, remnant mass, remnant code); returns the EEP index
- * used. The EEP whose interpolated log age brackets the age asked is found by bisection in the
- * span the run's age index allows, and the state is blended linearly in log age between it
- * and the next EEP. `hint` is an EEP index to try first (a star's index at its previous age,
- * −1 for none): when the age moved little, the search is a comparison or two instead.
+ * Stars located in mass and metallicity once, to be evaluated at many ages (the population
+ * evaluator): per star s and side t (0: the lower metallicity slab, 1: the upper), at p = 2s + t,
+ * the run (`runs[rid[p]]`), the first EEP index of the lower and upper track and the lower
+ * track's position in the run (`base[3p …]`, as MassBlend b0, b1, i), the fraction u
+ * (`frac[p]`) and the Hermite weights c00, c01, c10, c11 (`wts[4p …]`) of locateMass, and the
+ * EEP the star was last found at (`hint[p]`, −1 for none); per star the upper slab's weight
+ * `zw[s]` (0: the lower slab alone) and log10 of the initial mass `logMass[s]`.
  */
-export function blendRun(mb: MassBlend, hint: number, r: Float64Array): number {
-  return blendAt(null, mb, hint, r);
+export interface LocatedStars {
+  runs: GridRun[];
+  rid: Int32Array;
+  base: Int32Array;
+  frac: Float64Array;
+  wts: Float64Array;
+  hint: Int32Array;
+  zw: Float64Array;
+  logMass: Float64Array;
 }
 
 /**
- * blendRun, after locating the star's mass in `slab` first (locateMass) when one is given: one
- * function for the whole per-star path, so that V8 compiles it as one piece with the mass
- * location inlined — a call per star and slab instead of two (measured in bench/run.ts).
+ * One call of evaluateStars: `n` stars of initial masses `mass` (Msun) at ages `age` (yr),
+ * into `out`. Either `located` is given (stars found in mass and z ahead of time, already
+ * checked against the grid's ranges) or the stars are located here: their z per star in `z`,
+ * or, when `z` is null, all at the metallicity position `zk`, `zw` (see locateZ). `hrOnly`:
+ * write only phase, mass, luminosity and teff. One object shape for every caller keeps the
+ * loop's property reads monomorphic.
  */
-function blendAt(slab: GridSlab | null, mb: MassBlend, hint: number, r: Float64Array): number {
-  if (slab !== null) locateMass(slab, mb);
-  const run = mb.run;
-  const b0 = mb.b0;
-  const b1 = mb.b1;
-  const i = mb.i;
-  const w = mb.w;
-  const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11];
-  const u = w[W_U];
-  const m = w[W_M];
-  const la = w[W_LA];
-  const n = run.n;
-  // last j with age(j) <= la; the log age and its slope open each EEP's record (REC.logAge = 0)
-  const A = run.rec;
-  const a0i = REC_STRIDE * b0;
-  const a1i = REC_STRIDE * b1;
-  // j: the last EEP whose blended log age is ≤ la — from the hint when it is near (walkFrom,
-  // −1 when not), else searched; `young`: the star is younger than the first EEP
-  let j = hint >= 0 && hint < n - 1 ? walkFrom(A, a0i, a1i, w, n, hint) : -1;
-  let young = false;
-  if (j < 0) {
-    // narrow the search with the run's age index (see indexRunAges), then bisect
-    let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
-    const below = !(bin >= 0); // younger than the index's first edge (or age 0: la = −∞)
-    if (below) bin = 0;
-    else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
-    const I = run.ageIndex;
-    const r0 = i * AGE_BINS + bin;
-    const r1 = u > 0 ? r0 + AGE_BINS : r0;
-    let lo = below ? 0 : I[r0] < I[r1] ? I[r0] : I[r1];
-    let hi = I[r0 + 1] > I[r1 + 1] ? I[r0 + 1] : I[r1 + 1];
-    if (bin === AGE_BINS - 2) hi = n - 1;
-    // when the index puts both tracks past their first EEP at the bin's lower edge (≤ la),
-    // the blended first EEP is too (the monotone cubic stays between its nodes): only
-    // otherwise is the star's age compared with the first EEP's, to catch the youngest
-    if (lo === 0 && !(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) young = true;
-    else {
-      while (lo < hi) {
-        const mid = (lo + hi + 1) >> 1;
-        const x0 = a0i + REC_STRIDE * mid;
-        const x1 = a1i + REC_STRIDE * mid;
-        if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
-        else hi = mid - 1;
+export interface StarJob {
+  grid: Grid;
+  n: number;
+  mass: ArrayLike<number>;
+  age: ArrayLike<number>;
+  z: ArrayLike<number> | null;
+  zk: number;
+  zw: number;
+  located: LocatedStars | null;
+  hrOnly: boolean;
+  out: StateColumns;
+}
+
+/** A StarJob to be filled in by its caller. */
+export function createStarJob(grid: Grid, out: StateColumns): StarJob {
+  return { grid, n: 0, mass: EMPTY, age: EMPTY, z: null, zk: 0, zw: 0, located: null, hrOnly: false, out };
+}
+const EMPTY = new Float64Array(0);
+
+/**
+ * The interpolator's one hot loop, shared by GridQuery.columns, GridQuery.star and the
+ * population evaluator. For each star: check its mass, z and age against the grid's ranges
+ * (status 1, 2, 3 and a row of zeros when outside); find its tracks in each metallicity slab it
+ * needs (locateMass, or the located stars' stored blend); find the EEP whose interpolated log
+ * age brackets the age asked — from the star's last EEP when it is near (walkFrom), else by
+ * bisection in the span the run's age index allows — and blend the state linearly in log age
+ * between that EEP and the next, each EEP's values being the Hermite blend in log M of the two
+ * tracks; mix the two slabs linearly in log Z when they agree on phase and remnant (else the
+ * nearer slab answers whole: a star is never half in one phase and half in another); write L
+ * and Teff from their logs, the radius by Stefan–Boltzmann, log g from mass and radius, and a
+ * black hole with L = Teff = 0 at its Schwarzschild radius.
+ *
+ * The whole per-star path is this one function, with only small helpers (locateMass, walkFrom,
+ * exp10, log10) that V8 inlines: a star costs no call, so no double is boxed on its way and no
+ * piece of the path can be left behind in a slower tier while the rest is optimised (a large
+ * per-star callee had once stayed in V8's baseline tier for a whole run, one run in forty, at a
+ * fifth of the speed; measured in bench/run.ts).
+ */
+export function evaluateStars(job: StarJob): void {
+  const grid = job.grid;
+  const slabs = grid.slabs;
+  const n = job.n;
+  const masses = job.mass;
+  const ages = job.age;
+  const zs = job.z;
+  const L = job.located;
+  const hrOnly = job.hrOnly;
+  const o = job.out;
+  const mMin = grid.massRange.min;
+  const mMax = grid.massRange.max;
+  const zMin = grid.zRange.min;
+  const zMax = grid.zRange.max;
+  const zk0 = job.zk;
+  const zw0 = job.zw;
+  const w = MW;
+  const R = RES;
+  for (let s = 0; s < n; s++) {
+    const age = ages[s];
+    const m = masses[s];
+    let bad = 0;
+    let k = zk0;
+    let zw = zw0;
+    if (L === null) {
+      if (!(m >= mMin && m <= mMax)) bad = 1;
+      else if (zs !== null) {
+        const z = zs[s];
+        if (!(z >= zMin && z <= zMax)) bad = 2;
+        else {
+          locateZ(grid, log10(z), ZK, ZW, 0);
+          k = ZK[0];
+          zw = ZW[0];
+        }
+      }
+    } else zw = L.zw[s];
+    if (bad === 0 && !(age >= 0 && age <= MAX_AGE)) bad = 3;
+    if (bad !== 0) {
+      o.status[s] = bad;
+      o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
+      o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
+      continue;
+    }
+    o.status[s] = 0;
+    const la = log10(age);
+    const lm = L === null ? log10(m) : L.logMass[s];
+    w[W_M] = m;
+    w[W_LM] = lm;
+    w[W_LA] = la;
+    const sides = zw > 0 ? 2 : 1;
+    for (let t = 0; t < sides; t++) {
+      // the star's tracks in this slab: run, first EEP of each track, weights in w
+      let run: GridRun;
+      let b0: number;
+      let b1: number;
+      let i: number;
+      let hint = -1;
+      if (L === null) {
+        locateMass(slabs[k + t], MB);
+        run = MB.run;
+        b0 = MB.b0;
+        b1 = MB.b1;
+        i = MB.i;
+      } else {
+        const p = 2 * s + t;
+        run = L.runs[L.rid[p]];
+        b0 = L.base[3 * p];
+        b1 = L.base[3 * p + 1];
+        i = L.base[3 * p + 2];
+        w[W_U] = L.frac[p];
+        w[W_C00] = L.wts[4 * p];
+        w[W_C01] = L.wts[4 * p + 1];
+        w[W_C10] = L.wts[4 * p + 2];
+        w[W_C11] = L.wts[4 * p + 3];
+        hint = L.hint[p];
+      }
+      const c00 = w[W_C00], c01 = w[W_C01], c10 = w[W_C10], c11 = w[W_C11];
+      const u = w[W_U];
+      const ne = run.n;
+      // the log age and its slope open each EEP's record (REC.logAge = 0)
+      const A = run.rec;
+      const a0i = REC_STRIDE * b0;
+      const a1i = REC_STRIDE * b1;
+      // j: the last EEP whose blended log age is ≤ la — from the hint when it is near
+      // (walkFrom, −1 when not), else searched; `young`: the star is younger than the first EEP
+      let j = hint >= 0 && hint < ne - 1 ? walkFrom(A, a0i, a1i, w, ne, hint) : -1;
+      let young = false;
+      if (j < 0) {
+        // narrow the search with the run's age index (see indexRunAges), then bisect
+        let bin = Math.floor((la - AGE_BIN_MIN) * INV_AGE_BIN_STEP);
+        const below = !(bin >= 0); // younger than the index's first edge (or age 0: la = −∞)
+        if (below) bin = 0;
+        else if (bin > AGE_BINS - 2) bin = AGE_BINS - 2;
+        const I = run.ageIndex;
+        const r0 = i * AGE_BINS + bin;
+        const r1 = u > 0 ? r0 + AGE_BINS : r0;
+        let lo = below ? 0 : I[r0] < I[r1] ? I[r0] : I[r1];
+        let hi = I[r0 + 1] > I[r1 + 1] ? I[r0 + 1] : I[r1 + 1];
+        if (bin === AGE_BINS - 2) hi = ne - 1;
+        // when the index puts both tracks past their first EEP at the bin's lower edge (≤ la),
+        // the blended first EEP is too (the monotone cubic stays between its nodes): only
+        // otherwise is the star's age compared with the first EEP's, to catch the youngest
+        if (lo === 0 && !(la > c00 * A[a0i] + c10 * A[a0i + 1] + c01 * A[a1i] + c11 * A[a1i + 1])) young = true;
+        else {
+          while (lo < hi) {
+            const mid = (lo + hi + 1) >> 1;
+            const x0 = a0i + REC_STRIDE * mid;
+            const x1 = a1i + REC_STRIDE * mid;
+            if (c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1] <= la) lo = mid;
+            else hi = mid - 1;
+          }
+        }
+        j = lo;
+      }
+      if (L !== null) L.hint[2 * s + t] = j;
+      // the fraction of the way in log age to the next EEP (0 at the first and the last)
+      let phi = 0;
+      if (!young && j < ne - 1) {
+        const x0 = a0i + REC_STRIDE * j;
+        const x1 = a1i + REC_STRIDE * j;
+        const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
+        const ak = c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1];
+        phi = ak > aj ? (la - aj) / (ak - aj) : 0;
+        if (phi > 1) phi = 1;
+      }
+      const r = 8 * t;
+      R[r] = run.phase[j];
+      const q0 = (b0 + j) * REC_STRIDE;
+      const q1 = (b1 + j) * REC_STRIDE;
+      // next EEP's records (the same ones when phi = 0, so no read past the run)
+      const step = phi > 0 ? REC_STRIDE : 0;
+      const psi = 1 - phi;
+      const e0 = c00 * psi, e1 = c01 * psi, f0 = c10 * psi, f1 = c11 * psi;
+      const g0 = c00 * phi, g1 = c01 * phi, h0 = c10 * phi, h1 = c11 * phi;
+      // mass, core mass, log L, log Teff (REC offsets 2, 4, 6, 8) into R[r + 1] … R[r + 4]
+      for (let c = REC.mass; c < REC_STRIDE; c += 2) {
+        const x0 = q0 + c;
+        const x1 = q1 + c;
+        R[r + (c >> 1)] =
+          e0 * A[x0] + f0 * A[x0 + 1] + e1 * A[x1] + f1 * A[x1 + 1] +
+          g0 * A[x0 + step] + h0 * A[x0 + step + 1] + g1 * A[x1 + step] + h1 * A[x1 + step + 1];
+      }
+      // the grid holds masses as fractions of the initial mass; a star that has lost nothing
+      // keeps its birth mass exactly (not m × 0.9999999999999999)
+      R[r + 1] = R[r + 1] >= 1 - 1e-12 ? m : R[r + 1] * m;
+      R[r + 2] *= m;
+      const ti = i + u;
+      const t0 = Math.floor(ti);
+      const tf = ti - t0;
+      const t1 = tf > 0 ? t0 + 1 : t0;
+      R[r + 5] = run.logMsLifetime[t0] * (1 - tf) + run.logMsLifetime[t1] * tf;
+      R[r + 6] = run.remnantMass[t0] * (1 - tf) + run.remnantMass[t1] * tf;
+      R[r + 7] = run.remnant;
+      if (R[r + 2] > R[r + 1]) R[r + 2] = R[r + 1];
+    }
+    if (sides === 2) {
+      // two slabs: linearly in log Z when they agree on phase and remnant, else the nearer
+      if (R[0] !== R[8] || R[7] !== R[15]) {
+        if (zw >= 0.5) for (let c = 0; c < 8; c++) R[c] = R[c + 8];
+      } else {
+        const v = 1 - zw;
+        for (let c = 1; c <= 6; c++) R[c] = v * R[c] + zw * R[c + 8];
+        if (R[2] > R[1]) R[2] = R[1];
       }
     }
-    j = lo;
+    const ph = R[0];
+    const mass = R[1];
+    const black = ph === BLACK_HOLE;
+    o.phase[s] = ph;
+    o.mass[s] = mass;
+    if (hrOnly) {
+      o.luminosity[s] = black ? 0 : exp10(R[3]);
+      o.teff[s] = black ? 0 : exp10(R[4]);
+      continue;
+    }
+    // a star that kept its birth mass has its log already
+    const logMass = mass === m ? lm : log10(mass);
+    o.coreMass[s] = R[2];
+    if (black) {
+      const rs = schwarzschildRadius(mass);
+      o.luminosity[s] = 0;
+      o.teff[s] = 0;
+      o.radius[s] = rs;
+      o.logg[s] = LOGG_SUN + logMass - 2 * log10(rs);
+    } else {
+      const logR = 0.5 * R[3] - 2 * (R[4] - LOG_TEFF_SUN);
+      o.logg[s] = LOGG_SUN + logMass - 2 * logR;
+      const lum = exp10(R[3]);
+      const T = exp10(R[4]);
+      const f = TEFF_SUN / T;
+      o.luminosity[s] = lum;
+      o.teff[s] = T;
+      o.radius[s] = Math.sqrt(lum) * f * f; // Stefan–Boltzmann, as logR
+    }
+    o.msLifetime[s] = R[5] === 0 ? 0 : exp10(R[5]);
+    o.remnantMass[s] = R[6];
+    o.remnant[s] = R[7];
   }
-  // the fraction of the way in log age to the next EEP (0 at the first and the last)
-  let phi = 0;
-  if (!young && j < n - 1) {
-    const x0 = a0i + REC_STRIDE * j;
-    const x1 = a1i + REC_STRIDE * j;
-    const aj = c00 * A[x0] + c10 * A[x0 + 1] + c01 * A[x1] + c11 * A[x1 + 1];
-    const ak = c00 * A[x0 + REC_STRIDE] + c10 * A[x0 + REC_STRIDE + 1] + c01 * A[x1 + REC_STRIDE] + c11 * A[x1 + REC_STRIDE + 1];
-    phi = ak > aj ? (la - aj) / (ak - aj) : 0;
-    if (phi > 1) phi = 1;
-  }
-  r[0] = run.phase[j];
-  const D = run.rec;
-  const q0 = (b0 + j) * REC_STRIDE;
-  const q1 = (b1 + j) * REC_STRIDE;
-  // next EEP's records (the same ones when phi = 0, so no read past the run)
-  const step = phi > 0 ? REC_STRIDE : 0;
-  const psi = 1 - phi;
-  const e0 = c00 * psi, e1 = c01 * psi, f0 = c10 * psi, f1 = c11 * psi;
-  const g0 = c00 * phi, g1 = c01 * phi, h0 = c10 * phi, h1 = c11 * phi;
-  // mass, core mass, log L, log Teff (REC offsets 2, 4, 6, 8) into r[1] … r[4]
-  for (let c = REC.mass; c < REC_STRIDE; c += 2) {
-    const x0 = q0 + c;
-    const x1 = q1 + c;
-    r[c >> 1] =
-      e0 * D[x0] + f0 * D[x0 + 1] + e1 * D[x1] + f1 * D[x1 + 1] +
-      g0 * D[x0 + step] + h0 * D[x0 + step + 1] + g1 * D[x1 + step] + h1 * D[x1 + step + 1];
-  }
-  // the grid holds masses as fractions of the initial mass; a star that has lost nothing
-  // keeps its birth mass exactly (not m × 0.9999999999999999)
-  r[1] = r[1] >= 1 - 1e-12 ? m : r[1] * m;
-  r[2] *= m;
-  const ti = i + u;
-  const t0 = Math.floor(ti);
-  const tf = ti - t0;
-  const t1 = tf > 0 ? t0 + 1 : t0;
-  r[5] = run.logMsLifetime[t0] * (1 - tf) + run.logMsLifetime[t1] * tf;
-  r[6] = run.remnantMass[t0] * (1 - tf) + run.remnantMass[t1] * tf;
-  r[7] = run.remnant;
-  if (r[2] > r[1]) r[2] = r[1];
-  return j;
 }
 
 /**
@@ -228,79 +394,6 @@ function walkFrom(A: Float64Array, a0i: number, a1i: number, w: Float64Array, n:
 }
 
 /**
- * Evaluates the grid at the star in MB and the metallicity position in ZK, ZW into R0: the
- * two slabs bracketing log Z are blended linearly in log Z when they agree on the phase, else
- * the nearer one answers.
- */
-function evalGrid(grid: Grid): void {
-  const slabs = grid.slabs;
-  const k = ZK[0];
-  const w = ZW[0];
-  blendAt(slabs[k], MB, -1, R0);
-  if (w === 0) return;
-  blendAt(slabs[k + 1], MB, -1, R1);
-  mixSlabs(R0, R1, w);
-}
-
-/**
- * Blends the results of the two slabs bracketing a star's log Z, `r0` (lower) and `r1`
- * (upper, weight `w`), into `r0`: linearly when they agree on the phase and the remnant, else
- * the nearer slab's answer whole — a star is never half in one phase and half in another.
- */
-export function mixSlabs(r0: Float64Array, r1: Float64Array, w: number): void {
-  if (r0[0] !== r1[0] || r0[7] !== r1[7]) {
-    if (w >= 0.5) r0.set(r1);
-    return;
-  }
-  const v = 1 - w;
-  for (let c = 1; c <= 6; c++) r0[c] = v * r0[c] + w * r1[c];
-  if (r0[2] > r0[1]) r0[2] = r0[1];
-}
-
-/** Row `s` of `o` for a star that cannot be computed: `status` (see StateColumns) and zeros. */
-export function clearStateRow(o: StateColumns, s: number, status: number): void {
-  o.status[s] = status;
-  o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
-  o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
-}
-
-/**
- * Writes one star's numeric state from an evaluation result `r` (phase, mass, core mass,
- * log L, log Teff, log msLifetime, remnant mass, remnant code) and the star's MassBlend
- * scratch `w` (its initial mass and that mass's log10) into row `s` of `o`: L and
- * Teff from their logs, radius by Stefan–Boltzmann, log g from mass and radius, a black hole
- * with L = Teff = 0 and its Schwarzschild radius.
- */
-export function writeStateRow(o: StateColumns, s: number, r: Float64Array, w: Float64Array): void {
-  const ph = r[0];
-  const mass = r[1];
-  // a star that kept its birth mass has its log already (w: the star's MassBlend scratch)
-  const logMass = mass === w[W_M] ? w[W_LM] : log10(mass);
-  o.phase[s] = ph;
-  o.mass[s] = mass;
-  o.coreMass[s] = r[2];
-  if (ph === BLACK_HOLE) {
-    const rs = schwarzschildRadius(mass);
-    o.luminosity[s] = 0;
-    o.teff[s] = 0;
-    o.radius[s] = rs;
-    o.logg[s] = LOGG_SUN + logMass - 2 * log10(rs);
-  } else {
-    const logR = 0.5 * r[3] - 2 * (r[4] - LOG_TEFF_SUN);
-    o.logg[s] = LOGG_SUN + logMass - 2 * logR;
-    const L = exp10(r[3]);
-    const T = exp10(r[4]);
-    const f = TEFF_SUN / T;
-    o.luminosity[s] = L;
-    o.teff[s] = T;
-    o.radius[s] = Math.sqrt(L) * f * f; // Stefan–Boltzmann, as logR
-  }
-  o.msLifetime[s] = r[5] === 0 ? 0 : exp10(r[5]);
-  o.remnantMass[s] = r[6];
-  o.remnant[s] = r[7];
-}
-
-/**
  * Creates the interpolator of a grid: `star(initialMass, age, z)` answers one star with the
  * full schema state; `columns(input, out)` answers many through typed arrays with no
  * per-star allocation. Between metallicities it interpolates in log Z.
@@ -321,18 +414,25 @@ export function createGridQuery(grid: Grid): GridQuery {
       throw new RangeError(`age ${age} yr outside 0–${MAX_AGE} yr (0–100 Gyr)`);
     }
   };
+  // one star's scratch for star(): its inputs and a row of output columns
+  const one = { m: new Float64Array(1), age: new Float64Array(1), z: new Float64Array(1) };
+  const oneJob = createStarJob(grid, allocateStateColumns(1));
+  const job = createStarJob(grid, oneJob.out);
   return {
     grid,
     star(initialMass: number, age: number, z: number): StarState {
       checkStar(initialMass, age, z);
-      MW[W_M] = initialMass;
-      MW[W_LM] = Math.log10(initialMass);
-      MW[W_LA] = Math.log10(age);
-      locateZ(grid, Math.log10(z), ZK, ZW, 0);
-      evalGrid(grid);
+      one.m[0] = initialMass;
+      one.age[0] = age;
+      one.z[0] = z;
+      oneJob.n = 1;
+      oneJob.mass = one.m;
+      oneJob.age = one.age;
+      oneJob.z = one.z;
+      evaluateStars(oneJob);
       return observeState(
-        initialMass, z, age, R0[0], R0[1], R0[2], R0[3], R0[4],
-        R0[5] === 0 ? 0 : 10 ** R0[5], REMNANT_CODES[R0[7]], R0[6],
+        initialMass, z, age, RES[0], RES[1], RES[2], RES[3], RES[4],
+        RES[5] === 0 ? 0 : 10 ** RES[5], REMNANT_CODES[RES[7]], RES[6],
       );
     },
     columns(input: QueryInput, out?: StateColumns): StateColumns {
@@ -343,31 +443,27 @@ export function createGridQuery(grid: Grid): GridQuery {
       const o = out ?? allocateStateColumns(n);
       if (o.mass.length < n) throw new RangeError(`columns: output holds ${o.mass.length} stars, need ${n}`);
       const zs = input.z;
-      const zScalar = typeof zs === 'number';
-      if (zScalar) locateZ(grid, Math.log10(zs), ZK, ZW, 0);
-      const mMin = massRange.min;
-      const mMax = massRange.max;
-      const zMin = zRange.min;
-      const zMax = zRange.max;
-      for (let s = 0; s < n; s++) {
-        const m = input.initialMass[s];
-        const age = input.age[s];
-        const z = zScalar ? zs : zs[s];
-        let bad = 0;
-        if (!(m >= mMin && m <= mMax)) bad = 1;
-        else if (!(z >= zMin && z <= zMax)) bad = 2;
-        else if (!(age >= 0 && age <= MAX_AGE)) bad = 3;
-        if (bad) {
-          clearStateRow(o, s, bad);
-          continue;
+      job.n = n;
+      job.mass = input.initialMass;
+      job.age = input.age;
+      job.out = o;
+      if (typeof zs === 'number') {
+        if (!(zs >= zRange.min && zs <= zRange.max)) {
+          // every star is outside the grid's metallicities: status 2 for each (its mass first)
+          job.z = new Float64Array(n).fill(zs);
+        } else {
+          locateZ(grid, Math.log10(zs), ZK, ZW, 0);
+          job.z = null;
+          job.zk = ZK[0];
+          job.zw = ZW[0];
         }
-        o.status[s] = 0;
-        MW[W_M] = m;
-        MW[W_LM] = log10(m);
-        MW[W_LA] = log10(age);
-        if (!zScalar) locateZ(grid, log10(z), ZK, ZW, 0);
-        evalGrid(grid);
-        writeStateRow(o, s, R0, MW);
+      } else job.z = zs;
+      try {
+        evaluateStars(job);
+      } finally {
+        job.out = oneJob.out; // hold no reference to the caller's arrays
+        job.mass = job.age = EMPTY;
+        job.z = null;
       }
       return o;
     },
