@@ -132,6 +132,39 @@ describe('createGridQuery(grid).columns(input, out)', () => {
     expect(c.luminosity[1]).toBe(0);
   });
 
+  test('columns() over several blocks (refused rows among them) gives each star what columns() gives it alone', () => {
+    // evaluateStars works in blocks of 1024 stars: rows either side of the block edges, and
+    // refused rows (mass, z, age) scattered through them, must not disturb their neighbours
+    const n = 2600;
+    const rnd = (k: number) => ((k * 2654435761) % 4294967296) / 4294967296;
+    const m = new Float64Array(n);
+    const a = new Float64Array(n);
+    const z = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      m[i] = i % 97 === 5 ? 500 : 0.1 * 1000 ** rnd(i + 1);
+      a[i] = i % 89 === 7 ? -1 : 1.38e10 * rnd(i + 7919);
+      z[i] = i % 83 === 11 ? 0.9 : 10 ** (-4 + 2.4 * rnd(i + 104729));
+    }
+    const all = q.columns({ initialMass: m, age: a, z });
+    const keys = ['status', 'phase', 'mass', 'coreMass', 'luminosity', 'teff', 'radius', 'logg', 'msLifetime', 'remnantMass', 'remnant'] as const;
+    for (const i of [0, 1, 5, 7, 11, 1022, 1023, 1024, 1025, 2047, 2048, 2049, 2599, ...Array.from({ length: 40 }, (_, k) => 61 * k + 3)]) {
+      const one = q.columns({ initialMass: [m[i]], age: [a[i]], z: [z[i]] });
+      for (const k of keys) expect(all[k][i], `${k} of row ${i}`).toBe(one[k][0]);
+    }
+    expect(all.status[5]).toBe(1);
+    expect(all.status[11]).toBe(2);
+    expect(all.status[7 + 89]).toBe(3);
+  });
+
+  test('a z at a metallicity node, its log rounded either way, answers as the node (one slab, not two)', () => {
+    const at = q.columns({ initialMass: [1, 3, 20], age: [4.6e9, 3e8, 8e6], z: 0.014 });
+    for (const z of [0.014 * (1 + 2e-16), 0.014 * (1 - 2e-16), 0.014 * (1 + 1e-13)]) {
+      const near = q.columns({ initialMass: [1, 3, 20], age: [4.6e9, 3e8, 8e6], z });
+      expect(Array.from(near.luminosity)).toEqual(Array.from(at.luminosity));
+      expect(Array.from(near.teff)).toEqual(Array.from(at.teff));
+    }
+  });
+
   test('columns() over random stars is finite, keeps coreMass ≤ mass and is deterministic (property)', () => {
     fc.assert(
       fc.property(

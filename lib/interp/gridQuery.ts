@@ -164,9 +164,83 @@ const EMPTY = new Float64Array(0);
  * fifth of the speed; measured in bench/run.ts).
  */
 export function evaluateStars(job: StarJob): void {
+  const n = job.n;
+  const L = job.located;
+  for (let from = 0; from < n; from += BLOCK) {
+    const count = Math.min(BLOCK, n - from);
+    logsOf(job.age, from, count, LA);
+    if (L === null) logsOf(job.mass, from, count, LM);
+    else LM.set(L.logMass.subarray(from, from + count));
+    blendBlock(job, from, count);
+    finishBlock(job.out, from, count, job.hrOnly);
+  }
+}
+
+/**
+ * Stars per block of evaluateStars: the logs going in and the rows' kinds (FIN) are scratch
+ * columns of a block, small enough to stay in cache.
+ */
+const BLOCK = 1024;
+/** log10 of the block's ages and initial masses (logsOf) */
+const LA = new Float64Array(BLOCK);
+const LM = new Float64Array(BLOCK);
+/**
+ * What finishBlock does with a row of the block: ROW_DONE nothing (a refused star), ROW_KEPT
+ * the star kept its birth mass (log g complete), ROW_LOST it lost mass (log g still needs
+ * log10 of the present mass), ROW_HOLE a black hole (log g from its mass and Schwarzschild
+ * radius, L = Teff = 0).
+ */
+const FIN = new Uint8Array(BLOCK);
+const ROW_DONE = 0;
+const ROW_KEPT = 1;
+const ROW_LOST = 2;
+const ROW_HOLE = 3;
+
+/** `out[q] = log10(x[from + q])` for q < count (see log10; NaN and the like go through). */
+function logsOf(x: ArrayLike<number>, from: number, count: number, out: Float64Array): void {
+  for (let q = 0; q < count; q++) out[q] = log10(x[from + q]);
+}
+
+/**
+ * Completes the block's rows from the logs blendBlock left in them: L, Teff and msLifetime from
+ * their logs, the radius by Stefan–Boltzmann, log g with the present mass's log; a black hole
+ * gets L = Teff = 0, its Schwarzschild radius and log g = log g☉ + log(M / R²) in solar units.
+ * One call site each for exp10 and log10, so that V8 inlines them here.
+ */
+function finishBlock(o: StateColumns, from: number, count: number, hrOnly: boolean): void {
+  for (let q = 0; q < count; q++) {
+    const f = FIN[q];
+    if (f === ROW_DONE) continue;
+    const s = from + q;
+    const hole = f === ROW_HOLE;
+    const lum = hole ? 0 : exp10(o.luminosity[s]);
+    const T = hole ? 0 : exp10(o.teff[s]);
+    o.luminosity[s] = lum;
+    o.teff[s] = T;
+    if (hrOnly) continue;
+    const lms = o.msLifetime[s];
+    o.msLifetime[s] = lms === 0 ? 0 : exp10(lms);
+    if (!hole) {
+      const x = TEFF_SUN / T;
+      o.radius[s] = Math.sqrt(lum) * x * x; // Stefan–Boltzmann, as log R
+    }
+    if (f === ROW_KEPT) continue;
+    const mass = o.mass[s];
+    if (hole) {
+      const rs = schwarzschildRadius(mass);
+      o.radius[s] = rs;
+      o.logg[s] = LOGG_SUN + log10(mass / (rs * rs));
+    } else o.logg[s] += log10(mass);
+  }
+}
+
+/**
+ * The block [from, from + count) of evaluateStars up to the logs: every column final but L,
+ * Teff and msLifetime (their logs), the radius and log g (see FIN) — what finishBlock completes.
+ */
+function blendBlock(job: StarJob, from: number, count: number): void {
   const grid = job.grid;
   const slabs = grid.slabs;
-  const n = job.n;
   const masses = job.mass;
   const ages = job.age;
   const zs = job.z;
@@ -181,7 +255,8 @@ export function evaluateStars(job: StarJob): void {
   const zw0 = job.zw;
   const w = MW;
   const R = RES;
-  for (let s = 0; s < n; s++) {
+  for (let q = 0; q < count; q++) {
+    const s = from + q;
     const age = ages[s];
     const m = masses[s];
     let bad = 0;
@@ -193,7 +268,7 @@ export function evaluateStars(job: StarJob): void {
         const z = zs[s];
         if (!(z >= zMin && z <= zMax)) bad = 2;
         else {
-          locateZ(grid, log10(z), ZK, ZW, 0);
+          locateZ(grid, Math.log10(z), ZK, ZW, 0);
           k = ZK[0];
           zw = ZW[0];
         }
@@ -204,11 +279,12 @@ export function evaluateStars(job: StarJob): void {
       o.status[s] = bad;
       o.phase[s] = 0; o.mass[s] = 0; o.coreMass[s] = 0; o.luminosity[s] = 0; o.teff[s] = 0; o.radius[s] = 0;
       o.logg[s] = 0; o.msLifetime[s] = 0; o.remnantMass[s] = 0; o.remnant[s] = 0;
+      FIN[q] = ROW_DONE;
       continue;
     }
     o.status[s] = 0;
-    const la = log10(age);
-    const lm = L === null ? log10(m) : L.logMass[s];
+    const la = LA[q];
+    const lm = LM[q];
     w[W_M] = m;
     w[W_LM] = lm;
     w[W_LA] = la;
@@ -330,34 +406,22 @@ export function evaluateStars(job: StarJob): void {
     }
     const ph = R[0];
     const mass = R[1];
-    const black = ph === BLACK_HOLE;
     o.phase[s] = ph;
     o.mass[s] = mass;
-    if (hrOnly) {
-      o.luminosity[s] = black ? 0 : exp10(R[3]);
-      o.teff[s] = black ? 0 : exp10(R[4]);
-      continue;
-    }
-    // a star that kept its birth mass has its log already
-    const logMass = mass === m ? lm : log10(mass);
-    o.coreMass[s] = R[2];
-    if (black) {
-      const rs = schwarzschildRadius(mass);
-      o.luminosity[s] = 0;
-      o.teff[s] = 0;
-      o.radius[s] = rs;
-      o.logg[s] = LOGG_SUN + logMass - 2 * log10(rs);
-    } else {
+    o.luminosity[s] = R[3];
+    o.teff[s] = R[4];
+    if (ph === BLACK_HOLE) FIN[q] = ROW_HOLE;
+    else {
+      // log g = log g☉ + log M − 2 log R; a star that kept its birth mass has log M already
+      const kept = mass === m;
+      FIN[q] = kept ? ROW_KEPT : ROW_LOST;
+      if (hrOnly) continue;
       const logR = 0.5 * R[3] - 2 * (R[4] - LOG_TEFF_SUN);
-      o.logg[s] = LOGG_SUN + logMass - 2 * logR;
-      const lum = exp10(R[3]);
-      const T = exp10(R[4]);
-      const f = TEFF_SUN / T;
-      o.luminosity[s] = lum;
-      o.teff[s] = T;
-      o.radius[s] = Math.sqrt(lum) * f * f; // Stefan–Boltzmann, as logR
+      o.logg[s] = LOGG_SUN + (kept ? lm : 0) - 2 * logR;
     }
-    o.msLifetime[s] = R[5] === 0 ? 0 : exp10(R[5]);
+    if (hrOnly) continue;
+    o.msLifetime[s] = R[5];
+    o.coreMass[s] = R[2];
     o.remnantMass[s] = R[6];
     o.remnant[s] = R[7];
   }
