@@ -132,6 +132,15 @@ describe('createGridQuery(grid).columns(input, out)', () => {
     expect(c.luminosity[1]).toBe(0);
   });
 
+  test('columns() with one z for all outside the grid refuses every row (mass first), then answers again', () => {
+    const c = q.columns({ initialMass: [1, 500, 1], age: [1e9, 1e9, -1], z: 0.5 });
+    expect(Array.from(c.status)).toEqual([2, 1, 2]);
+    expect(Array.from(c.luminosity)).toEqual([0, 0, 0]);
+    const d = q.columns({ initialMass: [1], age: [1e9], z: 0.014 });
+    expect(d.status[0]).toBe(0);
+    expect(d.luminosity[0]).toBe(q.columns({ initialMass: [1], age: [1e9], z: [0.014] }).luminosity[0]);
+  });
+
   test('columns() over several blocks (refused rows among them) gives each star what columns() gives it alone', () => {
     // evaluateStars works in blocks of 1024 stars: rows either side of the block edges, and
     // refused rows (mass, z, age) scattered through them, must not disturb their neighbours

@@ -121,7 +121,8 @@ export interface LocatedStars {
  * One call of evaluateStars: `n` stars of initial masses `mass` (Msun) at ages `age` (yr),
  * into `out`. Either `located` is given (stars found in mass and z ahead of time, already
  * checked against the grid's ranges) or the stars are located here: their z per star in `z`,
- * or, when `z` is null, all at the metallicity position `zk`, `zw` (see locateZ). `hrOnly`:
+ * or, when `z` is null, all at the metallicity position `zk`, `zw` (see locateZ; `zk` −1: one
+ * z for all, outside the grid's range). `hrOnly`:
  * write only phase, mass, luminosity and teff. One object shape for every caller keeps the
  * loop's property reads monomorphic.
  */
@@ -272,7 +273,7 @@ function blendBlock(job: StarJob, from: number, count: number): void {
           k = ZK[0];
           zw = ZW[0];
         }
-      }
+      } else if (k < 0) bad = 2;
     } else zw = L.zw[s];
     if (bad === 0 && !(age >= 0 && age <= MAX_AGE)) bad = 3;
     if (bad !== 0) {
@@ -512,12 +513,13 @@ export function createGridQuery(grid: Grid): GridQuery {
       job.age = input.age;
       job.out = o;
       if (typeof zs === 'number') {
+        job.z = null;
         if (!(zs >= zRange.min && zs <= zRange.max)) {
           // every star is outside the grid's metallicities: status 2 for each (its mass first)
-          job.z = new Float64Array(n).fill(zs);
+          job.zk = -1;
+          job.zw = 0;
         } else {
           locateZ(grid, Math.log10(zs), ZK, ZW, 0);
-          job.z = null;
           job.zk = ZK[0];
           job.zw = ZW[0];
         }
