@@ -122,9 +122,8 @@ export interface LocatedStars {
  * into `out`. Either `located` is given (stars found in mass and z ahead of time, already
  * checked against the grid's ranges) or the stars are located here: their z per star in `z`,
  * or, when `z` is null, all at the metallicity position `zk`, `zw` (see locateZ; `zk` −1: one
- * z for all, outside the grid's range). `hrOnly`:
- * write only phase, mass, luminosity and teff. One object shape for every caller keeps the
- * loop's property reads monomorphic.
+ * z for all, outside the grid's range). `hrOnly`: write only phase, mass, luminosity and teff.
+ * One object shape for every caller keeps the loop's property reads monomorphic.
  */
 export interface StarJob {
   grid: Grid;
@@ -158,11 +157,13 @@ const EMPTY = new Float64Array(0);
  * and Teff from their logs, the radius by Stefan–Boltzmann, log g from mass and radius, and a
  * black hole with L = Teff = 0 at its Schwarzschild radius.
  *
- * The whole per-star path is this one function, with only small helpers (locateMass, walkFrom,
- * exp10, log10) that V8 inlines: a star costs no call, so no double is boxed on its way and no
- * piece of the path can be left behind in a slower tier while the rest is optimised (a large
- * per-star callee had once stayed in V8's baseline tier for a whole run, one run in forty, at a
- * fifth of the speed; measured in bench/run.ts).
+ * It runs over blocks of BLOCK stars, each through three loops in functions of their own —
+ * logsOf (the log ages and masses), blendBlock (everything up to the logs of the answer),
+ * finishBlock (the powers of ten) — none of which is called per star: no double is boxed on
+ * its way through a call, no per-star callee can be left behind in a slower tier while the
+ * rest is optimised (a large one had once stayed in V8's baseline tier for a whole run, one
+ * run in forty, at a fifth of the speed), and log10 and exp10 each have one call site in a
+ * small function, within V8's inlining budget (measured in bench/run.ts).
  */
 export function evaluateStars(job: StarJob): void {
   const n = job.n;
@@ -411,16 +412,15 @@ function blendBlock(job: StarJob, from: number, count: number): void {
     o.mass[s] = mass;
     o.luminosity[s] = R[3];
     o.teff[s] = R[4];
-    if (ph === BLACK_HOLE) FIN[q] = ROW_HOLE;
-    else {
+    const hole = ph === BLACK_HOLE;
+    const kept = mass === m;
+    FIN[q] = hole ? ROW_HOLE : kept ? ROW_KEPT : ROW_LOST;
+    if (hrOnly) continue;
+    if (!hole) {
       // log g = log g☉ + log M − 2 log R; a star that kept its birth mass has log M already
-      const kept = mass === m;
-      FIN[q] = kept ? ROW_KEPT : ROW_LOST;
-      if (hrOnly) continue;
       const logR = 0.5 * R[3] - 2 * (R[4] - LOG_TEFF_SUN);
       o.logg[s] = LOGG_SUN + (kept ? lm : 0) - 2 * logR;
     }
-    if (hrOnly) continue;
     o.msLifetime[s] = R[5];
     o.coreMass[s] = R[2];
     o.remnantMass[s] = R[6];
